@@ -77,8 +77,15 @@ def main():
     here = os.path.dirname(os.path.abspath(__file__))
     outdir = sys.argv[1] if len(sys.argv) > 1 else os.path.join(
         here, "..", "plugin", "src", "test", "resources", "reference")
-    stars_tsv = sys.argv[2] if len(sys.argv) > 2 else "/work/shared/data/stars/navigational-stars.tsv"
-    bsc_path = sys.argv[3] if len(sys.argv) > 3 else "/work/shared/data/stars/bsc5.dat"
+    # the project's shared star data: beside the repository (as CI lays it) or at /work/shared
+    shared = next((d for d in (os.path.join(here, "..", "..", "shared", "data", "stars"),
+                               "/work/shared/data/stars") if os.path.isdir(d)),
+                  "/work/shared/data/stars")
+    stars_tsv = sys.argv[2] if len(sys.argv) > 2 else os.path.join(shared, "navigational-stars.tsv")
+    bsc_path = sys.argv[3] if len(sys.argv) > 3 else os.path.join(shared, "bsc5.dat")
+    for p in (stars_tsv, bsc_path):
+        if not os.path.exists(p):
+            S.fail("star data %s not found (give STARS_TSV and BSC5_DAT as arguments)" % p)
     S.ensure_swetest()
     stars = read_stars(stars_tsv)
     bsc = read_bsc(bsc_path)
