@@ -639,7 +639,8 @@ public final class Almanac {
     }
 
     /**
-     * The VSOP87-to-FK5 correction of Meeus (1998) eq. 32.3 as a small rotation of ecliptic vectors:
+     * The VSOP87-to-FK5 correction of Meeus (1998) eq. 32.3 as a small rotation of ecliptic vectors,
+     * with the precession-rate change from IAU 1976 to IAU 2006 added to dL:
      * dL = -0.09033" + 0.03916"(cos L' + sin L') tan B, dB = 0.03916"(cos L' - sin L'),
      * L' = L - 1.397° T - 0.00031° T^2.
      */
@@ -648,7 +649,11 @@ public final class Almanac {
         double delta = Math.toRadians(1.397 * tCenturies + 0.00031 * tCenturies * tCenturies);
         double wx = c * (Math.sin(delta) - Math.cos(delta));
         double wy = -c * (Math.cos(delta) + Math.sin(delta));
-        double wz = -0.09033 * ARCSEC;
+        // Longitude: Meeus' constant, and the change of the precession rate in longitude from the IAU
+        // 1976 value (5029.0966"/cy) that VSOP87's equinox of date follows to IAU 2006 (5028.796195"/cy,
+        // Capitaine et al. 2003, A&A 412, 567, eq. 39): -0.300405" T. Measured: without it the Sun's
+        // GHA drifts by -0.3"/cy against SOFA's IAU 2006 (AlmanacReferenceTest).
+        double wz = (-0.09033 - 0.300405 * tCenturies) * ARCSEC;
         // r' = r + w x r
         return new double[][] {{1, -wz, wy}, {wz, 1, -wx}, {-wy, wx, 1}};
     }
