@@ -386,7 +386,7 @@ public final class Almanac {
         private final double[] vC;
         private final double bm1;
         private final double dtYears;
-        private double[] sunTrueKm; // lazily: apparent geocentric Sun (true equator, km)
+        private final double[] sunTrueKm; // apparent geocentric Sun (true equator, km)
 
         InstantState(AstroTime t) {
             this.time = t;
@@ -412,6 +412,12 @@ public final class Almanac {
             double k = LIGHT_DAYS_PER_AU; // au/day to units of c
             vC = new double[] {v[0] * k, v[1] * k, v[2] * k};
             bm1 = Math.sqrt(1.0 - (vC[0] * vC[0] + vC[1] * vC[1] + vC[2] * vC[2]));
+            // The Sun: the heliocentric origin with light time and aberration (+ v tau).
+            double tau = earthR * LIGHT_DAYS_PER_AU;
+            double[] rho = {-earthXyz[0] + earthVel[0] * tau, -earthXyz[1] + earthVel[1] * tau,
+                -earthXyz[2] + earthVel[2] * tau};
+            double[] sv = mul(eclDateToTrue, rho);
+            sunTrueKm = new double[] {sv[0] * AU_KM, sv[1] * AU_KM, sv[2] * AU_KM};
         }
 
         @Override
@@ -453,13 +459,6 @@ public final class Almanac {
         }
 
         private double[] sunTrue() {
-            if (sunTrueKm == null) {
-                double tau = earthR * LIGHT_DAYS_PER_AU;
-                double[] rho = {-earthXyz[0] + earthVel[0] * tau, -earthXyz[1] + earthVel[1] * tau,
-                    -earthXyz[2] + earthVel[2] * tau};
-                double[] v = mul(eclDateToTrue, rho);
-                sunTrueKm = new double[] {v[0] * AU_KM, v[1] * AU_KM, v[2] * AU_KM};
-            }
             return sunTrueKm;
         }
 
