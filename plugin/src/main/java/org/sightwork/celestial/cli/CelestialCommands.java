@@ -11,6 +11,7 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of(new PlanCommand(), new IdentifyCommand(), new CompassCommand());
+        return List.of(new PlanCommand(), new IdentifyCommand(), new CompassCommand(), new ReduceCommand(),
+                new FixCommand());
     }
 }
