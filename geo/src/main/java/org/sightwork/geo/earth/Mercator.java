@@ -54,8 +54,14 @@ public final class Mercator {
      */
     public static double northingM(double latDeg) {
         double phi = Math.toRadians(Math.max(-MAX_LAT_DEG, Math.min(MAX_LAT_DEG, latDeg)));
-        double es = E * Math.sin(phi);
-        return A * (Math.log(Math.tan(Math.PI / 4 + phi / 2)) - E / 2 * Math.log((1 + es) / (1 - es)));
+        double s = Math.sin(phi);
+        // ln tan(π/4 + φ/2) − (e/2) ln((1 + e sin φ)/(1 − e sin φ)), written as atanh(sin φ) − e atanh(e sin φ),
+        // the same function with no loss of precision near the equator
+        return A * (atanh(s) - E * atanh(E * s));
+    }
+
+    private static double atanh(double x) {
+        return 0.5 * Math.log1p(2 * x / (1 - x));
     }
 
     /**

@@ -2,18 +2,14 @@ package org.sightwork.geo.earth;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.sis.referencing.CommonCRS;
-import org.apache.sis.referencing.GeodeticCalculator;
-import org.opengis.geometry.DirectPosition;
 
 /**
  * Range and bearing between two positions on the WGS84 ellipsoid, by the rhumb line and by the
  * great circle (the geodesic), as the chart's range tool shows them.
  *
- * <p><b>Method:</b> Apache SIS {@link GeodeticCalculator}: the geodesic by Karney's method
- * (Karney, C. F. F. (2013), Algorithms for geodesics, J. Geodesy 87, 43-55,
- * doi:10.1007/s00190-012-0578-z), the rhumb line on the ellipsoid through the isometric latitude.
- * To be replaced by the project's own sailings when they exist, with the same figures.
+ * <p><b>Method:</b> the project's {@link Sailings} (Apache SIS {@code GeodeticCalculator}: the
+ * geodesic by Karney (2013), J. Geodesy 87, 43-55, doi:10.1007/s00190-012-0578-z; the rhumb line
+ * on the ellipsoid after Bennett (1996)); the drawn geodesic is densified by its direct problem.
  *
  * <p><b>Accuracy:</b> checked against GeographicLib (geodesic) and against the rhumb line built
  * from GeographicLib's meridian arc and the isometric latitude: agreement better than 1 m and 1e-6°
@@ -37,15 +33,10 @@ public record RangeBearing(double greatCircleNm, double initialCourseDeg, double
      * @return the figures
      */
     public static RangeBearing between(GeoPosition from, GeoPosition to) {
-        GeodeticCalculator c = GeodeticCalculator.create(CommonCRS.WGS84.geographic());
-        c.setStartGeographicPoint(from.latDeg(), from.lonDeg());
-        c.setEndGeographicPoint(to.latDeg(), to.lonDeg());
-        double gc = c.getGeodesicDistance() / Earth.NAUTICAL_MILE_M;
-        double az1 = course(c.getStartingAzimuth());
-        double az2 = course(c.getEndingAzimuth());
-        double rl = c.getRhumblineLength() / Earth.NAUTICAL_MILE_M;
-        double rc = course(c.getConstantAzimuth());
-        return new RangeBearing(gc, az1, az2, rl, rc);
+        Sailings.GreatCircle gc = Sailings.greatCircle(from, to);
+        Sailings.RhumbLine rl = Sailings.rhumbLine(from, to);
+        return new RangeBearing(gc.distanceNm(), gc.initialCourseDeg(), gc.finalCourseDeg(), rl.distanceNm(),
+                rl.courseDeg());
     }
 
     /**
@@ -57,26 +48,13 @@ public record RangeBearing(double greatCircleNm, double initialCourseDeg, double
      * @return segments + 1 positions, the ends included
      */
     public static List<GeoPosition> geodesicPath(GeoPosition from, GeoPosition to, int segments) {
-        GeodeticCalculator c = GeodeticCalculator.create(CommonCRS.WGS84.geographic());
-        c.setStartGeographicPoint(from.latDeg(), from.lonDeg());
-        c.setEndGeographicPoint(to.latDeg(), to.lonDeg());
-        double d = c.getGeodesicDistance();
-        double az = c.getStartingAzimuth();
+        Sailings.GreatCircle gc = Sailings.greatCircle(from, to);
         List<GeoPosition> out = new ArrayList<>(segments + 1);
         out.add(from);
         for (int i = 1; i < segments; i++) {
-            c.setStartGeographicPoint(from.latDeg(), from.lonDeg());
-            c.setStartingAzimuth(az);
-            c.setGeodesicDistance(d * i / segments);
-            DirectPosition p = c.getEndPoint();
-            out.add(GeoPosition.of(p.getOrdinate(0), p.getOrdinate(1)));
+            out.add(Sailings.greatCircleDestination(from, gc.initialCourseDeg(), gc.distanceNm() * i / segments));
         }
         out.add(to);
         return out;
-    }
-
-    private static double course(double azDeg) {
-        double a = azDeg % 360;
-        return a < 0 ? a + 360 : a;
     }
 }
