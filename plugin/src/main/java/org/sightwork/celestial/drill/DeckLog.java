@@ -4,42 +4,34 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import org.sightwork.geo.earth.Angles;
 import org.sightwork.geo.earth.GeoPosition;
-import org.sightwork.geo.earth.Sailings;
+import org.sightwork.geo.track.DeadReckoning;
+import org.sightwork.geo.track.DrLeg;
+import org.sightwork.geo.track.DrLog;
 
 /**
  * The deck log an honest watchkeeper writes on the true track (heading steered and speed through
- * the water, rounded as logged), and the dead reckoning worked from it. The DR knows nothing of
- * the current, so it drifts from the truth by the current's set and drift, as at sea.
+ * the water, rounded as logged), as the shell's {@link DrLog}, and the dead reckoning worked from it
+ * by {@link DeadReckoning#dr}. The DR knows nothing of the current, so it drifts from the truth by
+ * the current's set and drift, as at sea.
  *
- * <p><b>Method.</b> An entry at departure, at every alteration (start of a leg) and every
- * {@code intervalMinutes} from departure; between entries the logged heading and speed hold. DR:
- * from the departure position, one rhumb line per period ({@link Sailings#rhumbDestination}) on the
- * logged heading for the logged speed times the period: the DR of Bowditch (dead reckoning: course
- * and speed through the water from a known position, no current; from memory).
+ * <p>An entry at departure, at every alteration (start of a leg) and every
+ * {@code intervalMinutes} from departure; between entries the logged heading and speed hold.
  *
  * <p><b>Limits.</b> No leeway, no compass or log error beyond the rounding of the entries.
  */
 public final class DeckLog {
 
-    /**
-     * One entry of the deck log.
-     *
-     * @param utc time of the entry
-     * @param headingDeg heading steered from now on, true (degrees, rounded as logged)
-     * @param speedKn speed through the water from now on (knots, rounded as logged)
-     * @param drPosition the DR position at the entry
-     * @param remark why the entry was made ("departure", "altered course, leg 2", "hourly")
-     */
-    public record Entry(Instant utc, double headingDeg, double speedKn, GeoPosition drPosition, String remark) {
-    }
+    private final DrLog log;
+    private final List<String> remarks;
+    private final Scenario.DrLogSpec spec;
 
-    private final List<Entry> entries;
-    private final Instant endUtc;
-
-    private DeckLog(List<Entry> entries, Instant endUtc) {
-        this.entries = List.copyOf(entries);
-        this.endUtc = endUtc;
+    private DeckLog(DrLog log, List<String> remarks, Scenario.DrLogSpec spec) {
+        this.log = log;
+        this.remarks = List.copyOf(remarks);
+        this.spec = spec;
     }
 
     /**
@@ -47,25 +39,21 @@ public final class DeckLog {
      *
      * @param track the true track
      * @param spec how the log is kept
-     * @return the log, with DR positions
+     * @return the log
      */
     public static DeckLog keep(TrueTrack track, Scenario.DrLogSpec spec) {
-        List<Entry> out = new ArrayList<>();
-        Instant t = track.startUtc();
-        GeoPosition dr = track.legs().get(0).from();
+        List<DrLeg> legs = new ArrayList<>();
+        List<String> remarks = new ArrayList<>();
         Duration step = Duration.ofMinutes(spec.intervalMinutes());
-        Instant nextRoutine = t.plus(step);
+        Instant nextRoutine = track.startUtc().plus(step);
         for (TrueTrack.Leg leg : track.legs()) {
             double hdg = roundTo(leg.headingDeg(), spec.courseResolutionDeg()) % 360.0;
             double spd = roundTo(leg.speedThroughWaterKn(), spec.speedResolutionKn());
             String remark = leg.number() == 1 ? "departure" : "altered course, leg " + leg.number();
             Instant at = leg.startUtc();
             while (true) {
-                if (!out.isEmpty()) {
-                    Entry prev = out.get(out.size() - 1);
-                    dr = run(prev.drPosition(), prev.headingDeg(), prev.speedKn(), prev.utc(), at);
-                }
-                out.add(new Entry(at, hdg, spd, dr, remark));
+                legs.add(new DrLeg(at, hdg, spd, 0.0));
+                remarks.add(remark);
                 while (!nextRoutine.isAfter(at)) {
                     nextRoutine = nextRoutine.plus(step);
                 }
@@ -73,62 +61,80 @@ public final class DeckLog {
                     break;
                 }
                 at = nextRoutine;
-                remark = "routine";
+                remark = "";
             }
-            t = leg.endUtc();
         }
-        Entry last = out.get(out.size() - 1);
-        out.add(new Entry(t, last.headingDeg(), 0.0,
-                run(last.drPosition(), last.headingDeg(), last.speedKn(), last.utc(), t), "arrived, log stopped"));
-        return new DeckLog(out, t);
+        return new DeckLog(new DrLog(track.legs().get(0).from(), legs, track.endUtc()), remarks, spec);
     }
 
-    /** @return the entries, in time order */
-    public List<Entry> entries() {
-        return entries;
+    /** @return the log as the shell's DR log */
+    public DrLog drLog() {
+        return log;
     }
 
     /**
-     * The DR position at a time, from the last entry before it.
+     * The DR position at a time.
      *
      * @param utc a time between departure and arrival
      * @return the DR position
+     * @throws DrillException outside the log
      */
     public GeoPosition drAt(Instant utc) {
-        return entryAt(utc).map(e -> run(e.drPosition(), e.headingDeg(), e.speedKn(), e.utc(), utc))
-                .orElseThrow(() -> new DrillException("the time " + utc + " is outside the deck log ("
-                        + entries.get(0).utc() + " to " + endUtc + ")"));
+        try {
+            return DeadReckoning.dr(log, utc);
+        } catch (IllegalArgumentException e) {
+            throw new DrillException("the time " + utc + " is outside the deck log (" + log.start() + " to "
+                    + log.end() + ")");
+        }
     }
 
     /**
-     * The logged heading and speed at a time (those of the last entry before it).
+     * The logged heading and speed in force at a time.
      *
      * @param utc a time between departure and arrival
-     * @return the entry in force
+     * @return the leg in force
      */
-    public Entry inForceAt(Instant utc) {
-        return entryAt(utc).orElseThrow(() -> new DrillException("the time " + utc + " is outside the deck log"));
+    public DrLeg inForceAt(Instant utc) {
+        int k = log.legAt(utc);
+        if (k < 0 || utc.isAfter(log.end())) {
+            throw new DrillException("the time " + utc + " is outside the deck log");
+        }
+        return log.legs().get(k);
     }
 
-    private java.util.Optional<Entry> entryAt(Instant utc) {
-        if (utc.isBefore(entries.get(0).utc()) || utc.isAfter(endUtc)) {
-            return java.util.Optional.empty();
-        }
-        Entry found = entries.get(0);
-        for (Entry e : entries) {
-            if (e.utc().isAfter(utc)) {
-                break;
+    /**
+     * The log as CSV in the shell's DR log form ({@link DrLog#HEADER}): the departure position on
+     * the first line, an end line with the time of arrival.
+     *
+     * @return the lines, LF line ends, ending with one
+     */
+    public String csv() {
+        int hd = decimals(spec.courseResolutionDeg());
+        int sd = decimals(spec.speedResolutionKn());
+        StringBuilder b = new StringBuilder(DrLog.HEADER).append('\n');
+        for (int i = 0; i < log.legs().size(); i++) {
+            DrLeg l = log.legs().get(i);
+            b.append(l.start()).append(',')
+                    .append(String.format(Locale.ROOT, "%0" + (hd == 0 ? 3 : hd + 4) + "." + hd + "f", l.headingDeg()))
+                    .append(',').append(String.format(Locale.ROOT, "%." + sd + "f", l.stwKn())).append(",0,");
+            if (i == 0) {
+                b.append(Angles.formatLatitude(log.departure().latDeg()).replace('′', '\'')).append(',')
+                        .append(Angles.formatLongitude(log.departure().lonDeg()).replace('′', '\''));
+            } else {
+                b.append(',');
             }
-            if (e.speedKn() > 0 || found.speedKn() == 0) {
-                found = e;
-            }
+            b.append(',').append(remarks.get(i)).append('\n');
         }
-        return java.util.Optional.of(found);
+        b.append(log.end()).append(",,,,,,arrived; log stopped\n");
+        return b.toString();
     }
 
-    private static GeoPosition run(GeoPosition from, double headingDeg, double speedKn, Instant t0, Instant t1) {
-        double hours = Duration.between(t0, t1).toNanos() / 3.6e12;
-        return hours == 0 ? from : Sailings.rhumbDestination(from, headingDeg, speedKn * hours);
+    static int decimals(double step) {
+        int d = 0;
+        while (d < 4 && Math.abs(step * Math.pow(10, d) - Math.rint(step * Math.pow(10, d))) > 1e-9) {
+            d++;
+        }
+        return d;
     }
 
     static double roundTo(double v, double step) {
