@@ -127,8 +127,8 @@ public record Scenario(int formatVersion, String title, String description, bool
      * local noon.
      *
      * @param dates the dates (UTC)
-     * @param morningBodies how many bodies at morning twilight (0 for none, else 2..6)
-     * @param eveningBodies how many bodies at evening twilight (0 for none, else 2..6)
+     * @param morningBodies how many bodies at morning twilight (0 for none, else 3..5)
+     * @param eveningBodies how many bodies at evening twilight (0 for none, else 3..5)
      * @param noonSun whether to add a noon Sun sight (a latitude by meridian altitude) and a
      *     morning Sun sight to run up to it
      */

@@ -259,8 +259,8 @@ public final class ScenarioReader {
         if (n == null) {
             return 0;
         }
-        if (!n.isInt() || (n.asInt() != 0 && (n.asInt() < 2 || n.asInt() > 6))) {
-            problem("autoSights." + name, "expected 0 (none) or a whole number of bodies from 2 to 6, got " + n);
+        if (!n.isInt() || (n.asInt() != 0 && (n.asInt() < 3 || n.asInt() > 5))) {
+            problem("autoSights." + name, "expected 0 (none) or a whole number of bodies from 3 to 5, got " + n);
             return 0;
         }
         return n.asInt();
@@ -273,9 +273,11 @@ public final class ScenarioReader {
             sessions.add(s.session());
         }
         if (f == null) {
-            // One fix per session, at its last sight.
+            // One fix per session of two sights or more, at its last sight.
             for (String s : sessions) {
-                out.add(new Scenario.FixRequest(s, Optional.empty()));
+                if (sights.stream().filter(x -> x.session().equals(s)).count() >= 2) {
+                    out.add(new Scenario.FixRequest(s, Optional.empty()));
+                }
             }
             return out;
         }
