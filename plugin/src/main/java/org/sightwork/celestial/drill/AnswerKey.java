@@ -1,5 +1,6 @@
 package org.sightwork.celestial.drill;
 
+import org.sightwork.celestial.sight.Limb;
 import java.time.Instant;
 import java.util.List;
 import java.util.Optional;
@@ -46,10 +47,10 @@ public record AnswerKey(int formatVersion, String title, boolean invented, long 
      * @param refractionArcmin refraction (negative)
      * @param semiDiameterArcmin semi-diameter (+ lower limb, − upper limb, 0 stars)
      * @param parallaxArcmin parallax in altitude (positive)
-     * @param otherArcmin anything else the correction chain applied (e.g. augmentation), 0 if none
+     * @param phaseArcmin phase correction of Venus or Mars (0 otherwise)
      */
     public record Corrections(double indexArcmin, double dipArcmin, double refractionArcmin,
-            double semiDiameterArcmin, double parallaxArcmin, double otherArcmin) {
+            double semiDiameterArcmin, double parallaxArcmin, double phaseArcmin) {
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.drill;
 
+import org.sightwork.celestial.sight.Limb;
 import java.time.Duration;
 import java.time.Instant;
 import java.time.LocalDate;
@@ -134,19 +135,20 @@ public final class DrillSchedule {
             DayPlanner planner = new DayPlanner(almanac);
             StarSelector selector = new StarSelector(almanac);
             double eye = scenario.observer().eyeHeightM();
-            for (LocalDate date : auto.dates()) {
+            for (Scenario.AutoDay ad : auto.days()) {
+                LocalDate date = ad.date();
                 Instant middle = date.atStartOfDay(java.time.ZoneOffset.UTC).plusHours(12).toInstant();
                 Instant ref = clamp(middle, deckLog);
                 DrLeg leg = deckLog.inForceAt(ref);
                 ShipTrack ship = new ShipTrack(deckLog.drAt(ref), ref, leg.headingDeg(), leg.stwKn());
                 DayWindow day = DayWindow.zoneDay(date, ship);
                 DayEvents ev = planner.dayEvents(ship, day, eye);
-                if (auto.morningBodies() > 0) {
-                    starSession(date + " morning stars", ev.morningStarTime(), "morning", auto.morningBodies(),
+                if (ad.morningBodies() > 0) {
+                    starSession(date + " morning stars", ev.morningStarTime(), "morning", ad.morningBodies(),
                             selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, Limb.CENTRE)),
                             autoFixTimes);
                 }
-                if (auto.noonSun()) {
+                if (ad.noonSun()) {
                     Optional<Instant> noon = planner.upperTransit(Body.SUN, ship, day);
                     String sess = date + " noon";
                     if (noon.isEmpty()) {
@@ -159,8 +161,8 @@ public final class DrillSchedule {
                         autoFixTimes.put(sess, tn);
                     }
                 }
-                if (auto.eveningBodies() > 0) {
-                    starSession(date + " evening stars", ev.eveningStarTime(), "evening", auto.eveningBodies(),
+                if (ad.eveningBodies() > 0) {
+                    starSession(date + " evening stars", ev.eveningStarTime(), "evening", ad.eveningBodies(),
                             selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, Limb.CENTRE)),
                             autoFixTimes);
                 }

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.drill;
 
+import org.sightwork.celestial.sight.Limb;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.util.EnumSet;
@@ -123,20 +124,28 @@ public record Scenario(int formatVersion, String title, String description, bool
     }
 
     /**
-     * Sessions the program chooses for each date: stars at morning and evening twilight, the Sun at
+     * Sessions the program chooses, day by day: stars at morning and evening twilight, the Sun at
      * local noon.
      *
-     * @param dates the dates (UTC)
+     * @param days the days, in order
+     */
+    public record AutoSchedule(List<AutoDay> days) {
+        /** Copies the list. */
+        public AutoSchedule {
+            days = List.copyOf(days);
+        }
+    }
+
+    /**
+     * What the program chooses on one day.
+     *
+     * @param date the date (zone date at the DR)
      * @param morningBodies how many bodies at morning twilight (0 for none, else 3..5)
      * @param eveningBodies how many bodies at evening twilight (0 for none, else 3..5)
      * @param noonSun whether to add a noon Sun sight (a latitude by meridian altitude) and a
-     *     morning Sun sight to run up to it
+     *     forenoon Sun sight to run up to it
      */
-    public record AutoSchedule(List<LocalDate> dates, int morningBodies, int eveningBodies, boolean noonSun) {
-        /** Copies the list. */
-        public AutoSchedule {
-            dates = List.copyOf(dates);
-        }
+    public record AutoDay(LocalDate date, int morningBodies, int eveningBodies, boolean noonSun) {
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.drill;
 
+import org.sightwork.celestial.sight.Limb;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -207,10 +208,12 @@ public final class ScenarioReader {
             String body = text(n, p, "body", null);
             Limb limb = Limb.CENTRE;
             if (n.has("limb")) {
-                try {
-                    limb = Limb.parse(n.get("limb").asText());
-                } catch (IllegalArgumentException e) {
-                    problem(p + ".limb", "expected lower, upper or centre, got '" + n.get("limb").asText() + "'");
+                switch (n.get("limb").asText().strip().toLowerCase(Locale.ROOT)) {
+                    case "lower" -> limb = Limb.LOWER;
+                    case "upper" -> limb = Limb.UPPER;
+                    case "centre", "center" -> limb = Limb.CENTRE;
+                    default -> problem(p + ".limb", "expected lower, upper or centre, got '"
+                            + n.get("limb").asText() + "'");
                 }
             } else if (body != null && (body.equalsIgnoreCase("sun") || body.equalsIgnoreCase("moon"))) {
                 limb = Limb.LOWER;
@@ -227,40 +230,49 @@ public final class ScenarioReader {
         if (a == null) {
             return Optional.empty();
         }
-        if (!a.isObject()) {
-            problem("autoSights", "expected an object {dates, morningBodies, eveningBodies, noonSun}");
+        if (!a.isArray() || a.isEmpty()) {
+            problem("autoSights", "expected a list of days {date, morningBodies, eveningBodies, noonSun}");
             return Optional.empty();
         }
-        allowOnly(a, "autoSights", "dates", "morningBodies", "eveningBodies", "noonSun");
-        List<LocalDate> dates = new ArrayList<>();
-        JsonNode d = a.get("dates");
-        if (d == null || !d.isArray() || d.isEmpty()) {
-            problem("autoSights.dates", "expected a list of dates such as [\"2026-06-21\"]");
-        } else {
-            for (int i = 0; i < d.size(); i++) {
-                try {
-                    dates.add(LocalDate.parse(d.get(i).asText()));
-                } catch (DateTimeParseException e) {
-                    problem("autoSights.dates[" + i + "]", "expected a date YYYY-MM-DD, got '" + d.get(i).asText() + "'");
+        List<Scenario.AutoDay> days = new ArrayList<>();
+        for (int i = 0; i < a.size(); i++) {
+            String p = "autoSights[" + i + "]";
+            JsonNode n = a.get(i);
+            if (!n.isObject()) {
+                problem(p, "expected an object {date, morningBodies, eveningBodies, noonSun}");
+                continue;
+            }
+            allowOnly(n, p, "date", "morningBodies", "eveningBodies", "noonSun");
+            LocalDate date = null;
+            JsonNode d = n.get("date");
+            try {
+                date = d == null ? null : LocalDate.parse(d.asText());
+                if (date == null) {
+                    problem(p + ".date", "missing; expected a date such as 2026-06-21");
                 }
+            } catch (DateTimeParseException e) {
+                problem(p + ".date", "expected a date YYYY-MM-DD, got '" + d.asText() + "'");
+            }
+            int morning = count(n, p, "morningBodies");
+            int evening = count(n, p, "eveningBodies");
+            boolean noon = bool(n, p, "noonSun", false);
+            if (morning == 0 && evening == 0 && !noon) {
+                problem(p, "asks for nothing: expected morningBodies, eveningBodies or noonSun");
+            }
+            if (date != null) {
+                days.add(new Scenario.AutoDay(date, morning, evening, noon));
             }
         }
-        int morning = count(a, "morningBodies");
-        int evening = count(a, "eveningBodies");
-        boolean noon = bool(a, "autoSights", "noonSun", false);
-        if (morning == 0 && evening == 0 && !noon) {
-            problem("autoSights", "asks for nothing: expected morningBodies, eveningBodies or noonSun");
-        }
-        return Optional.of(new Scenario.AutoSchedule(dates, morning, evening, noon));
+        return Optional.of(new Scenario.AutoSchedule(days));
     }
 
-    private int count(JsonNode a, String name) {
+    private int count(JsonNode a, String path, String name) {
         JsonNode n = a.get(name);
         if (n == null) {
             return 0;
         }
         if (!n.isInt() || (n.asInt() != 0 && (n.asInt() < 3 || n.asInt() > 5))) {
-            problem("autoSights." + name, "expected 0 (none) or a whole number of bodies from 3 to 5, got " + n);
+            problem(path + "." + name, "expected 0 (none) or a whole number of bodies from 3 to 5, got " + n);
             return 0;
         }
         return n.asInt();
