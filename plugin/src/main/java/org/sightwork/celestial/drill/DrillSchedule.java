@@ -145,7 +145,7 @@ public final class DrillSchedule {
                 DayEvents ev = planner.dayEvents(ship, day, eye);
                 if (ad.morningBodies() > 0) {
                     starSession(date + " morning stars", ev.morningStarTime(), "morning", ad.morningBodies(),
-                            selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, Limb.CENTRE)),
+                            selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, b.kind() == Body.Kind.MOON ? Limb.LOWER : Limb.CENTRE)),
                             autoFixTimes);
                 }
                 if (ad.noonSun()) {
@@ -163,7 +163,7 @@ public final class DrillSchedule {
                 }
                 if (ad.eveningBodies() > 0) {
                     starSession(date + " evening stars", ev.eveningStarTime(), "evening", ad.eveningBodies(),
-                            selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, Limb.CENTRE)),
+                            selector, deckLog, eye, problems, (sess, t, b) -> raw.add(new Raw(sess, t, b, b.kind() == Body.Kind.MOON ? Limb.LOWER : Limb.CENTRE)),
                             autoFixTimes);
                 }
             }

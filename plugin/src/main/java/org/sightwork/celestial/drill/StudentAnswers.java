@@ -121,6 +121,9 @@ public record StudentAnswers(String student, String file, List<FixAnswer> fixes,
             String kind = f[0].strip().toLowerCase(Locale.ROOT);
             try {
                 if (kind.equals("fix")) {
+                    if (f[3].isBlank() && f[4].isBlank()) {
+                        continue; // a template line not filled in
+                    }
                     Instant t = time(f[2], file, ln);
                     double lat = cell(file, ln, 4, "lat", f[3], "a latitude such as 38°25.1′N", true);
                     double lon = cell(file, ln, 5, "lon", f[4], "a longitude such as 028°01.9′W", false);
@@ -145,7 +148,7 @@ public record StudentAnswers(String student, String file, List<FixAnswer> fixes,
                     OptionalDouble in = f[6].isBlank() ? OptionalDouble.empty()
                             : OptionalDouble.of(intercept(f[6], file, ln));
                     if (ho.isEmpty() && in.isEmpty()) {
-                        throw new IllegalArgumentException(file + ": line " + ln + ": a sight row needs ho or intercept_nm");
+                        continue; // a template line not filled in
                     }
                     sights.add(new SightAnswer(ln, n, ho, in));
                 } else {
