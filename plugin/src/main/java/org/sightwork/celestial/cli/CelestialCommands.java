@@ -12,6 +12,6 @@ public final class CelestialCommands implements CommandProvider {
     @Override
     public List<Object> commands() {
         return List.of(new PlanCommand(), new IdentifyCommand(), new CompassCommand(), new ReduceCommand(),
-                new FixCommand());
+                new FixCommand(), new DrillCommand());
     }
 }

@@ -113,7 +113,7 @@ final class PlotComputer {
         try {
             ReducedSight reduced = reducer.reduce(sight, read.ap());
             return new Plot.SightResult(row, read, Optional.of(reduced), Optional.empty(), r.circleWanted());
-        } catch (SightException | IllegalArgumentException e) {
+        } catch (IllegalArgumentException e) {
             return new Plot.SightResult(row, read, Optional.empty(), Optional.of(e.getMessage()), r.circleWanted());
         }
     }

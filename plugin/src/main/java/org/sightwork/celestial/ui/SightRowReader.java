@@ -120,7 +120,7 @@ final class SightRowReader {
                 // The builder takes the watch time as UTC when the watch error is zero; with an
                 // error, the row's time is what the watch showed.
                 sight = Optional.of(b.build());
-            } catch (SightException | IllegalArgumentException e) {
+            } catch (IllegalArgumentException e) {
                 problems.put(columnOf(e.getMessage()), e.getMessage());
             }
         }
