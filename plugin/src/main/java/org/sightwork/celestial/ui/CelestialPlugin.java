@@ -50,7 +50,7 @@ public final class CelestialPlugin implements ChartPlugin {
     static final double AUTOSAVE_SECONDS = 60;
     /** The demo resources, beside this class. */
     static final String DEMO = "/org/sightwork/celestial/demo/";
-    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps.nmea", "demo-dr.csv",
+    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps-clean.nmea",
             "demo-sights.csv");
 
     private PluginContext ctx;
