@@ -193,7 +193,7 @@ final class PlotOverlays {
                 p.greatCircle(ends.get(0), ends.get(1), selected ? PlotStyle.ADVANCED_SELECTED : PlotStyle.ADVANCED_LINE);
                 String what = plot.get().sights().get(a.row()).label();
                 p.label(ends.get(1), String.format(Locale.ROOT, "%s run %.1f nm", what, a.runNm()),
-                        selected ? PlotStyle.SELECTED : PlotStyle.LOP, 4, 2);
+                        selected ? PlotStyle.SELECTED : PlotStyle.LOP, 4, 16);
             }
         }
     }

@@ -18,7 +18,6 @@ import javafx.scene.control.ToggleGroup;
 import javafx.scene.control.Tooltip;
 import javafx.scene.control.cell.CheckBoxTableCell;
 import javafx.scene.input.KeyCode;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.sightwork.celestial.reduction.LineOfPosition;
@@ -125,7 +124,8 @@ final class SightLogPanel extends VBox {
         pickAp.setToggleGroup(clickModes);
         pickDr.setTooltip(new Tooltip("The next click on the chart sets the DR of the selected sight"));
         pickAp.setTooltip(new Tooltip("The next click on the chart sets the AP of the selected sight"));
-        HBox buttons = new HBox(6, add, delete, pickDr, pickAp);
+        // A flow, not a row: the dock may be narrow, and a cut-off button label helps no one.
+        javafx.scene.layout.FlowPane buttons = new javafx.scene.layout.FlowPane(6, 4, add, delete, pickDr, pickAp);
         status.setWrapText(true);
         status.setMinHeight(36);
         VBox.setVgrow(table, Priority.ALWAYS);
