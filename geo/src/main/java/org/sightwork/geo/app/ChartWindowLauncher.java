@@ -1,7 +1,9 @@
 package org.sightwork.geo.app;
 
+import javafx.application.Application;
+
 /**
- * Opens the chart window. Until the window exists this prints what the command line offers.
+ * Opens the chart window, or says clearly that there is no display to open it on.
  */
 final class ChartWindowLauncher {
 
@@ -9,8 +11,21 @@ final class ChartWindowLauncher {
     }
 
     static int open() {
-        System.err.println("The chart window is not built yet; see `sightwork --help` for the commands.");
+        String display = System.getenv("DISPLAY");
+        String wayland = System.getenv("WAYLAND_DISPLAY");
+        if ((display == null || display.isBlank()) && (wayland == null || wayland.isBlank())) {
+            System.err.println("sightwork: no display (DISPLAY is not set), so the chart window cannot open.");
+            System.err.println("  Render the chart to an image instead: sightwork chart --out map.png");
+            System.err.println("  Or run under a virtual display: Xvfb :99 & DISPLAY=:99 sightwork");
+            return Main.EXIT_FAILED;
+        }
         System.err.println(Caution.TEXT);
-        return Main.EXIT_FAILED;
+        try {
+            Application.launch(ChartApplication.class);
+        } catch (RuntimeException e) {
+            System.err.println("sightwork: the chart window could not open: " + e.getMessage());
+            return Main.EXIT_FAILED;
+        }
+        return 0;
     }
 }

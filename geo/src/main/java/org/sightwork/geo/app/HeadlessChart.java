@@ -1,0 +1,146 @@
+package org.sightwork.geo.app;
+
+import java.awt.image.BufferedImage;
+import java.util.List;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.Node;
+import javafx.scene.canvas.Canvas;
+import javafx.scene.image.WritableImage;
+import org.sightwork.geo.chart.ChartSet;
+import org.sightwork.geo.render.ChartRenderer;
+import org.sightwork.geo.render.Palette;
+import org.sightwork.geo.render.Viewport;
+import org.sightwork.geo.spi.Severity;
+
+/**
+ * The chart without a window: the same layers, plugins' overlays and renderer as the window,
+ * painted onto an off-screen canvas and read back as an image. Behind {@code sightwork chart} and
+ * the pixel tests.
+ *
+ * <p><b>Thread:</b> make it and call {@link #render} on the JavaFX application thread
+ * ({@link HeadlessPlatform#call}).
+ */
+public final class HeadlessChart implements Shell {
+
+    private final ChartModel model = new ChartModel();
+    private final TaskRunner tasks = new TaskRunner(this::notify);
+    private final UserFiles userFiles = UserFiles.defaultLocation();
+    private final ChartRenderer renderer = new ChartRenderer();
+    private final PluginHost plugins = new PluginHost(this);
+    private Viewport requestedArea;
+
+    /**
+     * A headless chart.
+     *
+     * @param chart the chart data
+     * @param palette the palette
+     * @param startPlugins whether to start the plugins on the class path
+     */
+    public HeadlessChart(ChartSet chart, Palette palette, boolean startPlugins) {
+        model.layers().add(BundledChart.graticuleEntry());
+        model.addChartLayers(BundledChart.entriesOf(chart.layers()));
+        model.paletteProperty().set(palette);
+        if (startPlugins) {
+            plugins.startAll();
+        }
+    }
+
+    /**
+     * The model (layers, palette, passage time).
+     *
+     * @return the model
+     */
+    @Override
+    public ChartModel model() {
+        return model;
+    }
+
+    /**
+     * Waits until the plugins' background work is done (off the FX thread).
+     *
+     * @param timeoutMs the longest wait (milliseconds)
+     * @return true if done
+     * @throws InterruptedException if interrupted
+     */
+    public boolean awaitIdle(long timeoutMs) throws InterruptedException {
+        return tasks.awaitIdle(timeoutMs);
+    }
+
+    /**
+     * Paints a viewport and reads it back.
+     *
+     * @param viewport what to show, and the image size
+     * @return the image (ARGB)
+     */
+    public BufferedImage render(Viewport viewport) {
+        Canvas canvas = new Canvas(viewport.widthPx(), viewport.heightPx());
+        renderer.render(canvas.getGraphicsContext2D(), viewport, model.paletteProperty().get(),
+                model.paintingOrder(), e -> notify(Severity.ERROR, "A layer failed to paint: " + e.getMessage()));
+        WritableImage img = canvas.snapshot(null, null);
+        return SwingFXUtils.fromFXImage(img, null);
+    }
+
+    /**
+     * The area a plugin asked to show, if any.
+     *
+     * @return the viewport asked for, or null
+     */
+    public Viewport requestedArea() {
+        return requestedArea;
+    }
+
+    /**
+     * The plugins started.
+     *
+     * @return their names
+     */
+    public List<String> pluginNames() {
+        return plugins.names();
+    }
+
+    /** Stops the plugins and the workers. */
+    public void close() {
+        plugins.stopAll();
+        tasks.shutdown();
+    }
+
+    @Override
+    public TaskRunner tasks() {
+        return tasks;
+    }
+
+    @Override
+    public UserFiles userFiles() {
+        return userFiles;
+    }
+
+    @Override
+    public boolean isHeadless() {
+        return true;
+    }
+
+    @Override
+    public void addPanel(String title, Node content) {
+        // no window: panels are not shown
+    }
+
+    @Override
+    public void addCommand(String menu, String label, Runnable action) {
+        // no window: no menus
+    }
+
+    @Override
+    public void notify(Severity severity, String message) {
+        System.err.println("sightwork chart: " + severity.name().toLowerCase(java.util.Locale.ROOT) + ": " + message);
+    }
+
+    @Override
+    public void requestRepaint() {
+        // each render paints afresh
+    }
+
+    @Override
+    public void showArea(double southDeg, double westDeg, double northDeg, double eastDeg) {
+        requestedArea = Viewport.fitting(southDeg, westDeg, northDeg, eastDeg, 100, 100);
+    }
+}
