@@ -91,8 +91,8 @@ public final class IdentifyCommand implements Callable<Integer> {
             n.put("caution", Caution.TEXT.replace('\n', ' '));
             out.println(m.writeValueAsString(n));
         } else {
-            out.printf(Locale.ROOT, "Observed at %s from DR %s: Hs %s, azimuth %03.0f°%n", PlanCommand.iso(t), pos,
-                    Angles.formatDm(hs, 2), id.azimuthDeg());
+            out.printf(Locale.ROOT, "Observed at %s from DR %s: Hs %s, azimuth %s%n", PlanCommand.iso(t), pos,
+                    Angles.formatDm(hs, 2), PlanCommand.zn(id.azimuthDeg()));
             out.printf(Locale.ROOT, "  altitude used (less dip %.1f′ and refraction): %s%n",
                     SextantApprox.dipArcmin(eyeHeight), Angles.formatDm(id.observedAltDeg(), 2));
             out.printf(Locale.ROOT, "  the point observed: Dec %s, GHA %s, SHA %s%n", Angles.formatDeclination(id.decDeg()),
@@ -106,8 +106,8 @@ public final class IdentifyCommand implements Callable<Integer> {
     }
 
     private static void line(PrintWriter out, String what, Identification.Match m) {
-        out.printf(Locale.ROOT, "  %-10s %-16s miss %5.2f°   Hc %s Zn %03.0f° mag %.1f%n", what, m.body().name(),
-                m.missDeg(), Angles.formatDm(m.hcDeg(), 2), m.znDeg(), m.magnitude());
+        out.printf(Locale.ROOT, "  %-10s %-16s miss %5.2f°   Hc %s Zn %s mag %.1f%n", what, m.body().name(),
+                m.missDeg(), Angles.formatDm(m.hcDeg(), 2), PlanCommand.zn(m.znDeg()), Math.round(m.magnitude() * 10) / 10.0 + 0.0);
     }
 
     private static void match(ObjectNode n, Identification.Match m) {

@@ -194,12 +194,13 @@ public final class PlanCommand implements Callable<Integer> {
                 out.printf(Locale.ROOT, "  proposed set of %d: HDOP %.2f, smallest azimuth gap %.0f°%n",
                         p.chosen().size(), p.hdop(), p.smallestGapDeg());
             }
-            out.printf(Locale.ROOT, "  %-3s %-16s %9s %6s %5s %10s  %s%n", "", "body", "Hc", "Zn", "mag", "pre-set Hs", "");
+            out.printf(Locale.ROOT, "  %-1s %-16s %9s %5s %5s %10s  %s%n", "", "body", "Hc", "Zn", "mag", "pre-set Hs", "");
             for (VisibleBody b : p.visible()) {
-                out.printf(Locale.ROOT, "  %-3s %-16s %9s %5.0f° %5.1f %10s  %s%n", p.isChosen(b) ? "*" : "",
-                        b.body().name(), Angles.formatDm(b.hcDeg(), 2), b.znDeg(), b.magnitude(),
+                out.printf(Locale.ROOT, "  %-1s %-16s %9s %5s %5.1f %10s  %s%n", p.isChosen(b) ? "*" : "",
+                        b.body().name(), Angles.formatDm(b.hcDeg(), 2), zn(b.znDeg()), Math.round(b.magnitude() * 10) / 10.0 + 0.0,
                         Angles.formatDm(b.presetHsDeg(), 2), b.excludedBecause().orElse(""));
             }
+            out.println("  (* proposed)");
         }
         out.println();
         out.println("Pre-set Hs: Hc less parallax, plus mean refraction and dip; no index error.");
@@ -293,6 +294,12 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     // --- shared by the planning commands (identify, compass) ---
+
+    /** An azimuth to the whole degree, 000°-359° (359.6° shows as 000°, never 360°). */
+    static String zn(double deg) {
+        long z = Math.round(deg) % 360;
+        return String.format(Locale.ROOT, "%03d°", z);
+    }
 
     static ObjectMapper mapper() {
         return new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

@@ -59,6 +59,12 @@ public final class StarSelector {
     /** The Sun's altitude below which the sea horizon is usually too dark (degrees): nautical twilight. */
     public static final double DARK_HORIZON_SUN_ALT_DEG = -12.0;
 
+    /**
+     * Brighter than this counts the same in the tie-break (magnitude): the Moon or Venus is no easier
+     * to bring down to the horizon than Sirius; our own choice.
+     */
+    public static final double BRIGHT_ENOUGH_MAG = -1.5;
+
     /** The most candidates enumerated (the brightest); bounds the work at C(25, 5) sets. */
     static final int MAX_CANDIDATES = 25;
 
@@ -208,7 +214,7 @@ public final class StarSelector {
             }
             double mag = 0;
             for (int i : sets.get(s)) {
-                mag += cands.get(i).magnitude();
+                mag += Math.max(cands.get(i).magnitude(), BRIGHT_ENOUGH_MAG);
             }
             if (mag < pickMag) {
                 pickMag = mag;

@@ -211,7 +211,7 @@ public final class SkyView extends Canvas {
         double dx = (r + (chosen ? 7 : 3)) * (right ? 1 : -1);
         g.setFont(chosen ? Font.font("System", FontWeight.BOLD, 12) : Font.font("System", 9.5));
         g.setFill(chosen ? CHOSEN : b.eligible() ? INK : DIM);
-        g.fillText(String.format(Locale.ROOT, "%s %.1f", body.name(), b.magnitude()), p[0] + dx, p[1]);
+        g.fillText(String.format(Locale.ROOT, "%s %.1f", body.name(), Math.round(b.magnitude() * 10) / 10.0 + 0.0), p[0] + dx, p[1]);
     }
 
     /**
