@@ -22,9 +22,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code sightwork identify}: which star or planet was that, from its altitude and rough azimuth. */
 @Command(name = "identify",
-        description = {"Identifies an unknown star or planet from its sextant altitude and rough azimuth,",
-            "the time and the DR: the declination and hour angle of the point observed, the nearest",
-            "navigational star, planet or catalogue star brighter than 3.5, and the runner-up."},
+        description = {"Identifies an unknown star or planet from its sextant altitude and rough azimuth,"
+            + " the time and the DR: the declination and hour angle of the point observed, the nearest"
+            + " navigational star, planet or catalogue star brighter than 3.5, and the runner-up."},
         footer = {"", Caution.TEXT},
         mixinStandardHelpOptions = true)
 public final class IdentifyCommand implements Callable<Integer> {
@@ -83,6 +83,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             n.put("ghaDeg", id.ghaDeg());
             n.put("shaDeg", id.shaDeg());
             match(n.putObject("best"), id.best());
+            n.put("convincing", id.best().missDeg() <= StarIdentifier.CONVINCING_MISS_DEG);
             if (id.runnerUp().isPresent()) {
                 match(n.putObject("runnerUp"), id.runnerUp().get());
             } else {
@@ -98,6 +99,10 @@ public final class IdentifyCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "  the point observed: Dec %s, GHA %s, SHA %s%n", Angles.formatDeclination(id.decDeg()),
                     Angles.formatDm(id.ghaDeg(), 3), Angles.formatDm(id.shaDeg(), 3));
             line(out, "best match", id.best());
+            if (id.best().missDeg() > StarIdentifier.CONVINCING_MISS_DEG) {
+                out.printf(Locale.ROOT, "  note: no candidate lies within %.0f° of that point: check the time, altitude"
+                        + " and azimuth%n", StarIdentifier.CONVINCING_MISS_DEG);
+            }
             id.runnerUp().ifPresent(r -> line(out, "runner-up", r));
             out.println(Caution.TEXT);
         }

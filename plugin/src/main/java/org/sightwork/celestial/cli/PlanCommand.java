@@ -45,8 +45,8 @@ import picocli.CommandLine.Spec;
  * plans (or a plan at a chosen time), as text or JSON, optionally with the sky plot as a PNG.
  */
 @Command(name = "plan",
-        description = {"The day's sunrise, sunset, twilight, meridian passage, moonrise and moonset at a DR",
-            "that moves with the ship, and the best stars for the morning and evening twilight fixes.",
+        description = {"The day's sunrise, sunset, twilight, meridian passage, moonrise and moonset at a DR"
+            + " that moves with the ship, and the best stars for the morning and evening twilight fixes.",
             "Times are UTC. The day is the zone day at the DR (zone = lon / 15° rounded) unless --utc-day."},
         footer = {"", Caution.TEXT},
         mixinStandardHelpOptions = true)

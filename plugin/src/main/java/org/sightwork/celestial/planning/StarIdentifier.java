@@ -39,6 +39,13 @@ public final class StarIdentifier {
     /** Catalogue stars brighter than this magnitude are candidates (brightest a sextant will take). */
     public static final double CATALOGUE_MAG_LIMIT = 3.5;
 
+    /**
+     * A best match further than this from the observed point is reported as doubtful (degrees):
+     * a hand-bearing compass read to 2°-3° and a rough altitude put the point within about 3° of
+     * the star (common practice).
+     */
+    public static final double CONVINCING_MISS_DEG = 5.0;
+
     /** Catalogue entries closer than this to a brighter one are one star to the eye (degrees). */
     static final double SAME_STAR_DEG = 0.05;
 
