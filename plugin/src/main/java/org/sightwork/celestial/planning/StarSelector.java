@@ -132,6 +132,19 @@ public final class StarSelector {
         return new SightPlan(t, dr, sun.altitudeDeg(), visible, chosen, hdop(zns), smallestGapDeg(zns), notes);
     }
 
+    /**
+     * The well-placed bodies for a fix at a time and place, best set first: the short form of
+     * {@link #plan} for the drill generator.
+     *
+     * @param t the time
+     * @param dr the observer's position
+     * @param count 3, 4 or 5
+     * @return the proposed bodies by azimuth; empty if too few qualify
+     */
+    public List<VisibleBody> wellPlacedBodies(Instant t, GeoPosition dr, int count) {
+        return plan(t, dr, SelectionCriteria.DEFAULT.withSetSize(count)).chosen();
+    }
+
     private static Optional<String> exclusion(Body b, HorizonPoint h, HorizonPoint sun, HorizonPoint moon,
             SelectionCriteria c) {
         if (b.equals(Body.SUN)) {
