@@ -17,7 +17,9 @@ import java.time.format.DateTimeParseException;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.sightwork.celestial.almanac.Almanac;
@@ -93,6 +95,10 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--max-alt", paramLabel = "DEG", defaultValue = "70", description = "highest altitude proposed; default ${DEFAULT-VALUE}°")
     private double maxAlt;
 
+    @Option(names = "--transit", paramLabel = "BODY", split = ",",
+            description = "also the meridian passage (upper transit) of these bodies, e.g. --transit moon,jupiter,sirius")
+    private List<String> transitBodies = new ArrayList<>();
+
     @Option(names = "--sky-png", paramLabel = "FILE", description = "also draw the sky (evening plan, or --at) to this PNG")
     private Path skyPng;
 
@@ -122,7 +128,13 @@ public final class PlanCommand implements Callable<Integer> {
 
         Almanac almanac = Almanac.standard();
         DayWindow window = utcDay ? DayWindow.utcDay(day) : DayWindow.zoneDay(day, track);
-        DayEvents ev = new DayPlanner(almanac).dayEvents(track, window, eyeHeight);
+        DayPlanner planner = new DayPlanner(almanac);
+        DayEvents ev = planner.dayEvents(track, window, eyeHeight);
+        Map<String, Optional<Instant>> transits = new LinkedHashMap<>();
+        for (String name : transitBodies) {
+            Body b = body(spec, almanac, name.strip());
+            transits.put(b.name(), planner.upperTransit(b, track, window));
+        }
         StarSelector selector = new StarSelector(almanac);
         List<Labelled> plans = new ArrayList<>();
         if (atTime.isPresent()) {
@@ -144,9 +156,9 @@ public final class PlanCommand implements Callable<Integer> {
 
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.println(json(track, ev, plans));
+            out.println(json(track, ev, transits, plans));
         } else {
-            text(out, track, ev, plans);
+            text(out, track, ev, transits, plans);
         }
         out.flush();
         return 0;
@@ -156,7 +168,8 @@ public final class PlanCommand implements Callable<Integer> {
     private record Labelled(String heading, String key, Optional<SightPlan> plan) {
     }
 
-    private void text(PrintWriter out, ShipTrack track, DayEvents ev, List<Labelled> plans) {
+    private void text(PrintWriter out, ShipTrack track, DayEvents ev, Map<String, Optional<Instant>> transits,
+            List<Labelled> plans) {
         DayWindow w = ev.day();
         out.printf(Locale.ROOT, "Sight plan for %s (%s), times UTC%n", w.date(),
                 w.zoneHours().isPresent() ? String.format(Locale.ROOT, "zone day, zone %+d: %s to %s",
@@ -173,6 +186,7 @@ public final class PlanCommand implements Callable<Integer> {
         row(out, track, "nautical dusk", ev.nauticalDusk());
         row(out, track, "moonrise", ev.moonrise());
         row(out, track, "moonset", ev.moonset());
+        transits.forEach((name, t) -> row(out, track, "transit " + name, t));
         if (ev.sunDay() == DayEvents.SunDay.ALWAYS_UP) {
             out.println("  the Sun stays above the horizon all day");
         } else if (ev.sunDay() == DayEvents.SunDay.ALWAYS_DOWN) {
@@ -209,13 +223,13 @@ public final class PlanCommand implements Callable<Integer> {
 
     private static void row(PrintWriter out, ShipTrack track, String what, Optional<Instant> t) {
         if (t.isEmpty()) {
-            out.printf(Locale.ROOT, "  %-17s %s%n", what, "—  (does not happen this day)");
+            out.printf(Locale.ROOT, "  %-20s %s%n", what, "—  (does not happen this day)");
         } else {
-            out.printf(Locale.ROOT, "  %-17s %s   DR %s%n", what, hm(t.get()), track.positionAt(t.get()));
+            out.printf(Locale.ROOT, "  %-20s %s   DR %s%n", what, hm(t.get()), track.positionAt(t.get()));
         }
     }
 
-    private String json(ShipTrack track, DayEvents ev, List<Labelled> plans) {
+    private String json(ShipTrack track, DayEvents ev, Map<String, Optional<Instant>> transits, List<Labelled> plans) {
         ObjectMapper m = mapper();
         ObjectNode root = m.createObjectNode();
         DayWindow w = ev.day();
@@ -244,6 +258,8 @@ public final class PlanCommand implements Callable<Integer> {
         put(root, "moonrise", ev.moonrise());
         put(root, "moonset", ev.moonset());
         root.put("sunDay", ev.sunDay().name());
+        ObjectNode tr = root.putObject("transits");
+        transits.forEach((name, t) -> put(tr, name, t));
         for (Labelled l : plans) {
             if (l.plan().isEmpty()) {
                 root.putNull(l.key());

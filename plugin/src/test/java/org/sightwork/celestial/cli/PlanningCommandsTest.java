@@ -36,7 +36,7 @@ class PlanningCommandsTest {
     void planJsonHasTheDaysTimesUnderTheirKeys() throws Exception {
         // Greenwich 51.4769°N 0°, 2000-01-01: PyEphem 4.1.4 (planning-pyephem.tsv, case 317) has
         // sunrise 08:05:35Z, sunset 16:01:10Z, transit 12:03:17Z, moonrise 02:40:18Z.
-        Run r = run("plan", "--dr", "51.4769,0", "--date", "2000-01-01", "--format", "json");
+        Run r = run("plan", "--dr", "51.4769,0", "--date", "2000-01-01", "--transit", "sun,Jupiter", "--format", "json");
         assertEquals(0, r.code(), r.err());
         JsonNode j = new ObjectMapper().readTree(r.out());
         for (String k : List.of("sunrise", "sunset", "civilDawn", "civilDusk", "nauticalDawn", "nauticalDusk",
@@ -48,6 +48,9 @@ class PlanningCommandsTest {
         assertEquals(0.0, secondsBetween("2000-01-01T12:03:17Z", j.get("meridianPassage").asText()), 60, "transit");
         assertEquals(0.0, secondsBetween("2000-01-01T02:40:18Z", j.get("moonrise").asText()), 60, "moonrise");
         assertEquals(3, j.get("eveningStars").get("chosen").size(), "three stars proposed");
+        // The Sun's transit asked for by name is the meridian passage itself.
+        assertEquals(j.get("meridianPassage").asText(), j.get("transits").get("Sun").asText(), "Sun transit");
+        assertTrue(j.get("transits").get("Jupiter").isTextual(), "Jupiter transits that day");
         assertTrue(j.get("caution").asText().startsWith("CAUTION"), "caution");
     }
 

@@ -92,6 +92,18 @@ class DayPlannerMovingShipTest {
     }
 
     @Test
+    void aStarTransitsOneSiderealDayLaterEachDay() {
+        // A sidereal day is 23 h 56 min 4.09 s = 86164.09 s of mean solar time (common knowledge of
+        // the trade; from memory). Sirius' own motion and precession change it by well under 0.1 s.
+        GeoPosition p = new GeoPosition(30.0, -45.0);
+        ShipTrack still = ShipTrack.stationary(p);
+        org.sightwork.celestial.almanac.Body sirius = Almanac.standard().body("Sirius");
+        Instant d1 = planner.upperTransit(sirius, still, DayWindow.zoneDay(LocalDate.of(2026, 2, 10), still)).orElseThrow();
+        Instant d2 = planner.upperTransit(sirius, still, DayWindow.zoneDay(LocalDate.of(2026, 2, 11), still)).orElseThrow();
+        assertEquals(86164.09, Duration.between(d1, d2).toMillis() / 1000.0, 1.0, "one sidereal day (s)");
+    }
+
+    @Test
     void heightOfEyeMakesSunriseEarlier() {
         // Dip 1.76′ √h (from memory of the almanac's dip table): 25 m gives 8.8′ more depression;
         // on the equator at the equinox the Sun climbs 15′ a minute (vertically), so sunrise comes
