@@ -11,6 +11,6 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of(new PlanCommand(), new IdentifyCommand(), new CompassCommand());
+        return List.of(new AlmanacCommand(), new PlanCommand(), new IdentifyCommand(), new CompassCommand());
     }
 }
