@@ -11,6 +11,6 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of(new ReduceCommand(), new FixCommand());
+        return List.of(new AlmanacCommand(), new ReduceCommand(), new FixCommand());
     }
 }
