@@ -386,7 +386,7 @@ public final class Almanac {
         private final double[] vC;
         private final double bm1;
         private final double dtYears;
-        private double[] sunTrueKm; // lazily: apparent geocentric Sun (true equator, km)
+        private final double[] sunTrueKm; // apparent geocentric Sun (true equator, km)
 
         InstantState(AstroTime t) {
             this.time = t;
@@ -412,6 +412,12 @@ public final class Almanac {
             double k = LIGHT_DAYS_PER_AU; // au/day to units of c
             vC = new double[] {v[0] * k, v[1] * k, v[2] * k};
             bm1 = Math.sqrt(1.0 - (vC[0] * vC[0] + vC[1] * vC[1] + vC[2] * vC[2]));
+            // The Sun: the heliocentric origin with light time and aberration (+ v tau).
+            double tau = earthR * LIGHT_DAYS_PER_AU;
+            double[] rho = {-earthXyz[0] + earthVel[0] * tau, -earthXyz[1] + earthVel[1] * tau,
+                -earthXyz[2] + earthVel[2] * tau};
+            double[] sv = mul(eclDateToTrue, rho);
+            sunTrueKm = new double[] {sv[0] * AU_KM, sv[1] * AU_KM, sv[2] * AU_KM};
         }
 
         @Override
@@ -453,13 +459,6 @@ public final class Almanac {
         }
 
         private double[] sunTrue() {
-            if (sunTrueKm == null) {
-                double tau = earthR * LIGHT_DAYS_PER_AU;
-                double[] rho = {-earthXyz[0] + earthVel[0] * tau, -earthXyz[1] + earthVel[1] * tau,
-                    -earthXyz[2] + earthVel[2] * tau};
-                double[] v = mul(eclDateToTrue, rho);
-                sunTrueKm = new double[] {v[0] * AU_KM, v[1] * AU_KM, v[2] * AU_KM};
-            }
             return sunTrueKm;
         }
 
@@ -639,7 +638,8 @@ public final class Almanac {
     }
 
     /**
-     * The VSOP87-to-FK5 correction of Meeus (1998) eq. 32.3 as a small rotation of ecliptic vectors:
+     * The VSOP87-to-FK5 correction of Meeus (1998) eq. 32.3 as a small rotation of ecliptic vectors,
+     * with the precession-rate change from IAU 1976 to IAU 2006 added to dL:
      * dL = -0.09033" + 0.03916"(cos L' + sin L') tan B, dB = 0.03916"(cos L' - sin L'),
      * L' = L - 1.397° T - 0.00031° T^2.
      */
@@ -648,7 +648,11 @@ public final class Almanac {
         double delta = Math.toRadians(1.397 * tCenturies + 0.00031 * tCenturies * tCenturies);
         double wx = c * (Math.sin(delta) - Math.cos(delta));
         double wy = -c * (Math.cos(delta) + Math.sin(delta));
-        double wz = -0.09033 * ARCSEC;
+        // Longitude: Meeus' constant, and the change of the precession rate in longitude from the IAU
+        // 1976 value (5029.0966"/cy) that VSOP87's equinox of date follows to IAU 2006 (5028.796195"/cy,
+        // Capitaine et al. 2003, A&A 412, 567, eq. 39): -0.300405" T. Measured: without it the Sun's
+        // GHA drifts by -0.3"/cy against SOFA's IAU 2006 (AlmanacReferenceTest).
+        double wz = (-0.09033 - 0.300405 * tCenturies) * ARCSEC;
         // r' = r + w x r
         return new double[][] {{1, -wz, wy}, {wz, 1, -wx}, {-wy, wx, 1}};
     }
