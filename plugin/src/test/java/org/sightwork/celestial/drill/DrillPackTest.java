@@ -108,14 +108,11 @@ class DrillPackTest {
     @Test
     void theTrueTrackNmeaHasValidChecksumsAndTheTruePositions() throws Exception {
         DrillPack p = DrillGenerator.generate(Scenarios.demo(), 7, ALMANAC);
+        // The widely circulated example sentence (REFERENCES.md) checks the checksum rule below.
+        assertEquals("47", checksum("$GPGGA,123519,4807.038,N,01131.000,E,1,08,0.9,545.4,M,46.9,M,,*47"),
+                "the published example");
         for (String s : p.truthNmea()) {
-            // NMEA 0183: the checksum is the XOR of the characters between '$' and '*', two hex digits.
-            int star = s.indexOf('*');
-            int x = 0;
-            for (int i = 1; i < star; i++) {
-                x ^= s.charAt(i);
-            }
-            assertEquals(String.format(Locale.ROOT, "%02X", x), s.substring(star + 1), "checksum of " + s);
+            assertEquals(checksum(s), s.substring(s.indexOf('*') + 1), "checksum of " + s);
             assertTrue(s.startsWith("$GPRMC,") || s.startsWith("$GPGGA,"), s);
         }
         byte[] file = DrillPackWriter.files(p).get("key/true-track.nmea");
@@ -129,6 +126,15 @@ class DrillPackTest {
             assertEquals(truth.latDeg() * 60, t.latDeg(i) * 60, 0.0006, "latitude at " + t.time(i));
             assertEquals(truth.lonDeg() * 60, t.lonDeg(i) * 60, 0.0006, "longitude at " + t.time(i));
         }
+    }
+
+    /** NMEA 0183: the XOR of the characters between '$' and '*', as two upper-case hex digits. */
+    private static String checksum(String sentence) {
+        int x = 0;
+        for (int i = 1; i < sentence.indexOf('*'); i++) {
+            x ^= sentence.charAt(i);
+        }
+        return String.format(Locale.ROOT, "%02X", x);
     }
 
     @Test
