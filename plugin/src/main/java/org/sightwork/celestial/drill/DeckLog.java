@@ -17,7 +17,7 @@ import org.sightwork.geo.track.DrLog;
  * by {@link DeadReckoning#dr}. The DR knows nothing of the current, so it drifts from the truth by
  * the current's set and drift, as at sea.
  *
- * <p>An entry at departure, at every alteration (start of a leg) and every
+ * <p>An entry at departure, at every alteration (start of a leg, its time written to the minute) and every
  * {@code intervalMinutes} from departure; between entries the logged heading and speed hold.
  *
  * <p><b>Limits.</b> No leeway, no compass or log error beyond the rounding of the entries.
@@ -50,7 +50,12 @@ public final class DeckLog {
             double hdg = roundTo(leg.headingDeg(), spec.courseResolutionDeg()) % 360.0;
             double spd = roundTo(leg.speedThroughWaterKn(), spec.speedResolutionKn());
             String remark = leg.number() == 1 ? "departure" : "altered course, leg " + leg.number();
-            Instant at = leg.startUtc();
+            // The watchkeeper writes the time of an alteration to the minute.
+            Instant at = leg.number() == 1 ? leg.startUtc() : roundToMinute(leg.startUtc());
+            if (!legs.isEmpty() && !at.isAfter(legs.get(legs.size() - 1).start())) {
+                legs.remove(legs.size() - 1); // a routine entry in the same minute gives way
+                remarks.remove(remarks.size() - 1);
+            }
             while (true) {
                 legs.add(new DrLeg(at, hdg, spd, 0.0));
                 remarks.add(remark);
@@ -127,6 +132,10 @@ public final class DeckLog {
         }
         b.append(log.end()).append(",,,,,,arrived; log stopped\n");
         return b.toString();
+    }
+
+    private static Instant roundToMinute(Instant t) {
+        return Instant.ofEpochSecond(Math.round(t.toEpochMilli() / 60_000.0) * 60);
     }
 
     static int decimals(double step) {

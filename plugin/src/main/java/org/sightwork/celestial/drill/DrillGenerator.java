@@ -16,7 +16,11 @@ import org.sightwork.celestial.fix.FixSolver;
 import org.sightwork.celestial.reduction.ComputedAltitude;
 import org.sightwork.celestial.reduction.LineOfPosition;
 import org.sightwork.celestial.reduction.SightReduction;
-import org.sightwork.celestial.sight.AltitudeCorrector;
+import org.sightwork.celestial.almanac.BodyPosition;
+import org.sightwork.celestial.reduction.ReducedSight;
+import org.sightwork.celestial.reduction.SightReducer;
+import org.sightwork.celestial.sight.SightException;
+import org.sightwork.celestial.time.AstroTime;
 import org.sightwork.celestial.sight.IndexError;
 import org.sightwork.celestial.sight.Limb;
 import org.sightwork.celestial.sight.Sight;
@@ -32,14 +36,14 @@ import org.sightwork.geo.track.DrLeg;
  * the body's GHA and Dec there and then from the almanac and the exact observed altitude Ho = Hc at
  * the true position ({@link SightReduction}); the sextant altitude that the observer's conditions
  * (index error, height of eye, temperature, pressure, limb) turn into that Ho, by the altitude
- * corrections in reverse ({@link AltitudeCorrector#hsFor}); then the observer's random error
+ * corrections of {@link SightReducer} in reverse (fixed-point iteration, {@code hsFor}); then the observer's random error
  * (normal, {@link ObserverErrors}) is added and the reading rounded to the sextant's step. The
  * watch time is the true time plus the watch error, rounded to the watch's step. The DR columns are
  * the deck log's DR ({@link DeckLog}), not the truth.
  *
  * <p>The key works the sights exactly as a careful student would from the pack: the written Hs and
  * watch time, the given index and watch errors, the written DR as the assumed position
- * ({@link AltitudeCorrector#correct}, {@link LineOfPosition#reduce}), the fixes by least squares
+ * ({@link SightReducer}: the almanac, the corrections, the reduction), the fixes by least squares
  * ({@link FixSolver}, lines at other times carried along the deck log's DR). Each sight is also
  * worked with each {@link Mistake}, for the grader.
  *
@@ -87,6 +91,7 @@ public final class DrillGenerator {
         DrillSchedule schedule = DrillSchedule.of(scenario, almanac, deck);
         ObserverProfile obs = scenario.observer();
         ObserverErrors errors = new ObserverErrors(seed, obs.sextantSigmaArcmin());
+        SightReducer reducer = new SightReducer(almanac, 0.0);
         double ieRead = Math.round(obs.indexErrorArcmin() * 10.0) / 10.0;
         List<LoggedSight> logged = new ArrayList<>();
         List<String> problems = new ArrayList<>();
@@ -98,16 +103,20 @@ public final class DrillGenerator {
                 continue;
             }
             GeoPosition truth = track.positionAt(p.utc());
-            SightWork.Reading r = SightWork.read(almanac, p.body(), p.utc(), truth);
-            Optional<String> refusal = skyRule(p.body(), r.computed().hcDeg(), r.sunAltitudeDeg());
+            AstroTime at = AstroTime.ofUtc(p.utc());
+            BodyPosition bp = almanac.position(p.body(), at);
+            ComputedAltitude trueC = SightReduction.reduce(truth, bp.ghaDeg(), bp.decDeg());
+            BodyPosition sun = almanac.position(Body.SUN, at);
+            double sunAlt = SightReduction.reduce(truth, sun.ghaDeg(), sun.decDeg()).hcDeg();
+            Optional<String> refusal = skyRule(p.body(), trueC.hcDeg(), sunAlt);
             if (refusal.isPresent()) {
                 problems.add(who + ": " + refusal.get());
                 continue;
             }
-            Sight conditions = Sight.builder(p.body().name(), p.utc(), r.computed().hcDeg()).limb(p.limb())
+            Sight conditions = Sight.builder(p.body().name(), p.utc(), trueC.hcDeg()).limb(p.limb())
                     .indexError(IndexError.ofSignedReading(obs.indexErrorArcmin())).eyeHeightM(obs.eyeHeightM())
-                    .temperatureC(obs.temperatureC()).pressureHpa(obs.pressureHpa()).build();
-            double hsExact = AltitudeCorrector.hsFor(r.computed().hcDeg(), conditions, r.figures());
+                    .temperatureC(obs.temperatureC()).pressureHpa(obs.pressureHpa()).dr(truth).build();
+            double hsExact = hsFor(reducer, trueC.hcDeg(), conditions);
             double hsRead = roundTo(hsExact + noise / 60.0, obs.sextantResolutionArcmin() / 60.0);
             Instant watch = roundTo(p.utc().plusNanos(Math.round(obs.watchErrorS() * 1e9)), obs.watchResolutionS());
             GeoPosition dr = deck.drAt(p.utc());
@@ -115,13 +124,12 @@ public final class DrillGenerator {
                     Math.round(dr.lonDeg() * 600.0) / 600.0);
             DrLeg leg = deck.inForceAt(p.utc());
             logged.add(new LoggedSight(p.number(), p.session(), p.body(), p.limb(), p.utc(), watch, hsRead, noise,
-                    ieRead, truth, drWritten, leg.headingDeg(), leg.stwKn(), r.computed().hcDeg(), r.computed().znDeg(),
-                    r.sunAltitudeDeg()));
+                    ieRead, truth, drWritten, leg.headingDeg(), leg.stwKn(), trueC.hcDeg(), trueC.znDeg(), sunAlt));
         }
         if (!problems.isEmpty()) {
             throw new DrillException(problems);
         }
-        AnswerKey key = key(scenario, seed, almanac, track, deck, schedule, logged);
+        AnswerKey key = key(scenario, seed, reducer, track, deck, schedule, logged);
         return new DrillPack(scenario, seed, track, deck, logged, key, TruthNmea.sentences(track, NMEA_INTERVAL_S));
     }
 
@@ -162,7 +170,7 @@ public final class DrillGenerator {
 
     // --- the key ---
 
-    private static AnswerKey key(Scenario sc, long seed, Almanac almanac, TrueTrack track, DeckLog deck,
+    private static AnswerKey key(Scenario sc, long seed, SightReducer reducer, TrueTrack track, DeckLog deck,
             DrillSchedule schedule, List<LoggedSight> logged) {
         ObserverProfile obs = sc.observer();
         boolean ieGiven = sc.gives(Scenario.Given.INDEX_ERROR);
@@ -177,52 +185,49 @@ public final class DrillGenerator {
                     .indexError(ieGiven ? IndexError.ofSignedReading(s.indexReadingArcmin()) : IndexError.NONE)
                     .eyeHeightM(obs.eyeHeightM()).temperatureC(obs.temperatureC()).pressureHpa(obs.pressureHpa())
                     .dr(s.dr()).courseDeg(s.courseDeg()).speedKn(s.speedKn()).sigmaArcmin(sigma).build();
-            Instant utc = sight.utc();
-            SightWork.Reading r = SightWork.read(almanac, s.body(), utc, s.dr());
-            Worksheet ws = AltitudeCorrector.correct(sight, r.figures());
+            ReducedSight rs = reducer.reduce(sight, Optional.empty());
+            Worksheet ws = rs.worksheet();
             double ho = ws.hoDeg();
-            ComputedAltitude c = r.computed();
-            double intercept = (ho - c.hcDeg()) * 60.0;
+            ComputedAltitude c = rs.computed();
+            double intercept = rs.lop().interceptNm();
             List<AnswerKey.MistakeResult> mistakes = new ArrayList<>();
-            // Altitude mistakes: the corrections worked again with the one mistake.
+            // Each mistake: the sight worked again, through the same reducer, with that one mistake.
             if (ieGiven && sight.indexError().correctionArcmin() != 0.0) {
-                altitudeMistake(mistakes, Mistake.INDEX_ERROR_WRONG_SIGN, sight.toBuilder()
-                        .indexError(new IndexError(-sight.indexError().correctionArcmin())).build(), r, c);
+                mistakes.add(worked(reducer, Mistake.INDEX_ERROR_WRONG_SIGN, sight.toBuilder()
+                        .indexError(new IndexError(-sight.indexError().correctionArcmin())).build(), s.dr(), ho));
             }
             // Dip left out: Ha = Hs + IE; with the wrong sign: Ha = Hs + IE - dip. Worked by shifting Hs.
-            altitudeMistake(mistakes, Mistake.DIP_FORGOTTEN,
-                    withHs(sight, s.hsDeg() - ws.dipArcmin() / 60.0), r, c);
-            altitudeMistake(mistakes, Mistake.DIP_WRONG_SIGN,
-                    withHs(sight, s.hsDeg() - 2.0 * ws.dipArcmin() / 60.0), r, c);
+            mistakes.add(worked(reducer, Mistake.DIP_FORGOTTEN, with(sight, s.hsDeg() - ws.dipArcmin() / 60.0,
+                    sight.watchTime(), sight.watchFastSeconds()), s.dr(), ho));
+            mistakes.add(worked(reducer, Mistake.DIP_WRONG_SIGN, with(sight, s.hsDeg() - 2.0 * ws.dipArcmin() / 60.0,
+                    sight.watchTime(), sight.watchFastSeconds()), s.dr(), ho));
             if (s.limb() != Limb.CENTRE) {
-                altitudeMistake(mistakes, Mistake.SEMI_DIAMETER_FORGOTTEN, sight.toBuilder().limb(Limb.CENTRE).build(),
-                        r, c);
-                altitudeMistake(mistakes, Mistake.WRONG_LIMB, sight.toBuilder()
-                        .limb(s.limb() == Limb.LOWER ? Limb.UPPER : Limb.LOWER).build(), r, c);
+                mistakes.add(worked(reducer, Mistake.SEMI_DIAMETER_FORGOTTEN, sight.toBuilder().limb(Limb.CENTRE).build(),
+                        s.dr(), ho));
+                mistakes.add(worked(reducer, Mistake.WRONG_LIMB, sight.toBuilder()
+                        .limb(s.limb() == Limb.LOWER ? Limb.UPPER : Limb.LOWER).build(), s.dr(), ho));
             }
-            // Almanac mistakes: Ho as worked, Hc from the wrong almanac entry or the wrong longitude.
-            almanacMistake(mistakes, Mistake.HOUR_LATE, ho, almanac, s, utc.plus(Duration.ofHours(1)), s.dr());
-            almanacMistake(mistakes, Mistake.HOUR_EARLY, ho, almanac, s, utc.minus(Duration.ofHours(1)), s.dr());
-            almanacMistake(mistakes, Mistake.DAY_LATE, ho, almanac, s, utc.plus(Duration.ofDays(1)), s.dr());
-            almanacMistake(mistakes, Mistake.DAY_EARLY, ho, almanac, s, utc.minus(Duration.ofDays(1)), s.dr());
-            almanacMistake(mistakes, Mistake.LONGITUDE_SIGN, ho, almanac, s, utc,
-                    GeoPosition.of(s.dr().latDeg(), -s.dr().lonDeg()));
+            // Almanac mistakes: the almanac read for the wrong hour or day, the longitude's sign.
+            mistakes.add(worked(reducer, Mistake.HOUR_LATE, shifted(sight, Duration.ofHours(1)), s.dr(), ho));
+            mistakes.add(worked(reducer, Mistake.HOUR_EARLY, shifted(sight, Duration.ofHours(-1)), s.dr(), ho));
+            mistakes.add(worked(reducer, Mistake.DAY_LATE, shifted(sight, Duration.ofDays(1)), s.dr(), ho));
+            mistakes.add(worked(reducer, Mistake.DAY_EARLY, shifted(sight, Duration.ofDays(-1)), s.dr(), ho));
+            mistakes.add(worked(reducer, Mistake.LONGITUDE_SIGN, sight,
+                    GeoPosition.of(s.dr().latDeg(), -s.dr().lonDeg()), ho));
             if (weGiven && weTold != 0.0) {
-                almanacMistake(mistakes, Mistake.WATCH_ERROR_NOT_APPLIED, ho, almanac, s, s.watchTime(), s.dr());
-                almanacMistake(mistakes, Mistake.WATCH_ERROR_WRONG_SIGN, ho, almanac, s,
-                        s.watchTime().plusNanos(Math.round(weTold * 1e9)), s.dr());
+                mistakes.add(worked(reducer, Mistake.WATCH_ERROR_NOT_APPLIED,
+                        with(sight, s.hsDeg(), sight.watchTime(), 0.0), s.dr(), ho));
+                mistakes.add(worked(reducer, Mistake.WATCH_ERROR_WRONG_SIGN,
+                        with(sight, s.hsDeg(), sight.watchTime(), -weTold), s.dr(), ho));
             }
             mistakes.add(new AnswerKey.MistakeResult(Mistake.TOWARD_AWAY_SWAPPED, ho, c.hcDeg(), c.znDeg(), -intercept));
-            String label = s.body().name() + (s.limb() == Limb.CENTRE ? "" : s.limb() == Limb.LOWER ? " LL" : " UL")
-                    + " sight " + s.number();
-            lines.add(LineOfPosition.reduce(label, utc, s.dr(), r.position().ghaDeg(), r.position().decDeg(), ho,
-                    sigma));
+            lines.add(rs.lop());
             keys.add(new AnswerKey.SightKey(s.number(), s.session(), s.body().name(), s.limb(), s.trueUtc(),
-                    SightLogCsv.time(s.watchTime()), utc, SightLogCsv.altitude(s.hsDeg()), s.hsDeg(),
+                    SightLogCsv.time(s.watchTime()), sight.utc(), SightLogCsv.altitude(s.hsDeg()), s.hsDeg(),
                     s.randomErrorArcmin(), pos(s.truePosition()), pos(s.dr()), s.trueHoDeg(),
                     new AnswerKey.Corrections(ws.indexArcmin(), ws.dipArcmin(), ws.refractionArcmin(),
                             ws.semiDiameterArcmin(), ws.parallaxArcmin(), ws.phaseArcmin()),
-                    ho, r.position().ghaDeg(), r.position().decDeg(), c.lhaDeg(), c.hcDeg(), c.znDeg(), intercept,
+                    ho, rs.position().ghaDeg(), rs.position().decDeg(), c.lhaDeg(), c.hcDeg(), c.znDeg(), intercept,
                     mistakes));
         }
         List<AnswerKey.FixKey> fixes = new ArrayList<>();
@@ -256,20 +261,48 @@ public final class DrillGenerator {
                 keys, fixes);
     }
 
-    private static void altitudeMistake(List<AnswerKey.MistakeResult> out, Mistake m, Sight wrong,
-            SightWork.Reading r, ComputedAltitude c) {
-        double ho = AltitudeCorrector.correct(wrong, r.figures()).hoDeg();
-        out.add(new AnswerKey.MistakeResult(m, ho, c.hcDeg(), c.znDeg(), (ho - c.hcDeg()) * 60.0));
+    /**
+     * The sextant altitude that the conditions turn into the wanted Ho: the corrections of the
+     * reducer in reverse, by fixed-point iteration (dHo/dHs is within 1 ± 0.01 above -1°, so each
+     * step gains two digits; 1e-10° is reached in five or six).
+     */
+    static double hsFor(SightReducer reducer, double hoDeg, Sight conditions) {
+        double hs = conditions.hsDeg();
+        for (int i = 0; i < 30; i++) {
+            double ho = reducer.reduce(with(conditions, hs, conditions.watchTime(), conditions.watchFastSeconds()),
+                    Optional.empty()).worksheet().hoDeg();
+            double step = hoDeg - ho;
+            hs += step;
+            if (Math.abs(step) < 1e-10) {
+                break;
+            }
+        }
+        return hs;
     }
 
-    private static void almanacMistake(List<AnswerKey.MistakeResult> out, Mistake m, double ho, Almanac almanac,
-            LoggedSight s, Instant wrongUtc, GeoPosition ap) {
-        ComputedAltitude c = SightWork.read(almanac, s.body(), wrongUtc, ap).computed();
-        out.add(new AnswerKey.MistakeResult(m, ho, c.hcDeg(), c.znDeg(), (ho - c.hcDeg()) * 60.0));
+    /** The sight worked with a mistake; a wrong hour or longitude may put the body below the horizon. */
+    private static AnswerKey.MistakeResult worked(SightReducer reducer, Mistake m, Sight wrong, GeoPosition ap,
+            double correctHoDeg) {
+        try {
+            ReducedSight r = reducer.reduce(wrong, Optional.of(ap));
+            return new AnswerKey.MistakeResult(m, r.worksheet().hoDeg(), r.computed().hcDeg(), r.computed().znDeg(),
+                    r.lop().interceptNm());
+        } catch (SightException e) {
+            // The reducer refuses a body far below the horizon (only almanac mistakes get there, which
+            // leave Ho as it was); the student's Hc is still the formula's.
+            BodyPosition p = reducer.almanac().position(reducer.almanac().body(wrong.body()),
+                    AstroTime.ofUtc(wrong.utc()));
+            ComputedAltitude c = SightReduction.reduce(ap, p.ghaDeg(), p.decDeg());
+            return new AnswerKey.MistakeResult(m, correctHoDeg, c.hcDeg(), c.znDeg(), (correctHoDeg - c.hcDeg()) * 60.0);
+        }
     }
 
-    private static Sight withHs(Sight s, double hsDeg) {
-        return new Sight(s.body(), s.limb(), s.watchTime(), s.watchFastSeconds(), hsDeg, s.indexError(),
+    private static Sight shifted(Sight s, Duration d) {
+        return with(s, s.hsDeg(), s.watchTime().plus(d), s.watchFastSeconds());
+    }
+
+    private static Sight with(Sight s, double hsDeg, Instant watch, double watchFastS) {
+        return new Sight(s.body(), s.limb(), watch, watchFastS, hsDeg, s.indexError(),
                 s.eyeHeightM(), s.temperatureC(), s.pressureHpa(), s.dr(), s.courseDeg(), s.speedKn(),
                 s.sigmaArcmin(), s.artificialHorizon(), s.dipShortNm(), s.note());
     }

@@ -115,9 +115,11 @@ public final class ExerciseSheet {
         return c;
     }
 
-    private enum Style { TITLE, HEADING, TEXT, TABLE, PAGE_BREAK }
+    /** How a line is set. */
+    enum Style { TITLE, HEADING, TEXT, TABLE, PAGE_BREAK }
 
-    private record Line(Style style, String text) {
+    /** One line of the sheet. */
+    record Line(Style style, String text) {
     }
 
     /** The sheet as lines of text (also what the tests read). */

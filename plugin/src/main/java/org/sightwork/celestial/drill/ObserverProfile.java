@@ -34,17 +34,6 @@ public record ObserverProfile(double sextantSigmaArcmin, double indexErrorArcmin
         check("watchResolutionS", watchResolutionS, 0, 60, " s");
     }
 
-    /**
-     * A perfect observer with a perfect instrument and watch: no noise, no index or watch error, no
-     * rounding. Sights made with it reduce back to the truth exactly (up to arithmetic).
-     *
-     * @param eyeHeightM height of eye (metres)
-     * @return the profile
-     */
-    public static ObserverProfile perfect(double eyeHeightM) {
-        return new ObserverProfile(0, 0, eyeHeightM, 0, 10, 1010.25, 0, 0);
-    }
-
     private static void check(String name, double v, double min, double max, String unit) {
         if (!(v >= min && v <= max)) {
             throw new IllegalArgumentException(name + " " + v + unit + " is outside [" + min + unit + ", "

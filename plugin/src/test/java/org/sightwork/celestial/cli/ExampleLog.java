@@ -65,8 +65,12 @@ public final class ExampleLog {
             double hs = AltitudeCorrector.hsFor(hc, cond, figuresOf(reducer, cond, truth));
             hs += errorSigmaArcmin * random.nextGaussian() / 60.0;
             sb.append(String.format(Locale.ROOT, "%s,%s,%s,%s,1.2 on,2.5,18,1016,%s,%s,%.0f,%.1f,%s%n", p.utc(), p.body(),
-                    p.limb().toLowerCase(Locale.ROOT), Angles.formatDm(hs, 2).replace("′", "'"),
-                    Angles.formatLatitude(dr.latDeg()).replace("′", "'"), Angles.formatLongitude(dr.lonDeg()).replace("′", "'"),
+                    p.limb().toLowerCase(Locale.ROOT), errorSigmaArcmin == 0.0 ? String.format(Locale.ROOT, "%.8f", hs)
+                            : Angles.formatDm(hs, 2).replace("′", "'"),
+                    errorSigmaArcmin == 0.0 ? String.format(Locale.ROOT, "%.6f", dr.latDeg())
+                            : Angles.formatLatitude(dr.latDeg()).replace("′", "'"),
+                    errorSigmaArcmin == 0.0 ? String.format(Locale.ROOT, "%.6f", dr.lonDeg())
+                            : Angles.formatLongitude(dr.lonDeg()).replace("′", "'"),
                     courseDeg, speedKn, "invented example" + (figures.warnings().isEmpty() ? "" : " (low)")));
         }
         return sb.toString();
