@@ -60,8 +60,20 @@ public final class PreparedLayer {
     public record Part(double[] xy, int n, boolean closed, int featureIndex, double widthM, double heightM) {
     }
 
+    /**
+     * A name to write inside an area feature.
+     *
+     * @param text the name (the feature's {@code name} attribute)
+     * @param xM easting of a point inside the feature (metres)
+     * @param yM northing of that point (metres)
+     * @param sizeM the larger side of the feature's envelope (metres)
+     */
+    public record NameLabel(String text, double xM, double yM, double sizeM) {
+    }
+
     private final ChartLayer layer;
     private final List<Geometry> projected;
+    private final List<NameLabel> labels = new ArrayList<>();
     private final AtomicReferenceArray<STRtree> bands = new AtomicReferenceArray<>(SIMPLIFIED_BANDS + 1);
     private final int[] vertexCounts = new int[SIMPLIFIED_BANDS + 1];
     private final Envelope extentM;
@@ -98,6 +110,15 @@ public final class PreparedLayer {
         }
         PreparedLayer p = new PreparedLayer(layer, projected, extentM);
         p.buildBand(SIMPLIFIED_BANDS, projected);
+        for (int i = 0; i < projected.size(); i++) {
+            Object name = layer.features().get(i).attributes().get("name");
+            Geometry g = projected.get(i);
+            if (name instanceof String text && !text.isBlank() && g.getDimension() == 2 && !g.isEmpty()) {
+                org.locationtech.jts.geom.Point in = g.getInteriorPoint();
+                Envelope e = g.getEnvelopeInternal();
+                p.labels.add(new NameLabel(text.strip(), in.getX(), in.getY(), Math.max(e.getWidth(), e.getHeight())));
+            }
+        }
         return p;
     }
 
@@ -281,6 +302,15 @@ public final class PreparedLayer {
      */
     public int vertexCount(int band) {
         return vertexCounts[band];
+    }
+
+    /**
+     * Names to write inside area features (from their {@code name} attribute).
+     *
+     * @return the labels (unmodifiable)
+     */
+    public List<NameLabel> labels() {
+        return java.util.Collections.unmodifiableList(labels);
     }
 
     /**

@@ -21,6 +21,10 @@ public final class VectorLayerRenderer implements RenderLayer {
 
     /** Rings and lines smaller than this across, both ways, are not drawn (pixels). */
     static final double MIN_PART_PX = 0.8;
+    /** An area is named when it is at least this big on the screen (pixels). */
+    static final double MIN_NAMED_PX = 70;
+    private static final javafx.scene.text.Font NAME_FONT = javafx.scene.text.Font.font("System",
+            javafx.scene.text.FontPosture.ITALIC, 12);
     private final PreparedLayer layer;
     private final FeatureClass featureClass;
     private int lastVertices;
@@ -97,6 +101,31 @@ public final class VectorLayerRenderer implements RenderLayer {
         }
         if (anyPoints[0]) {
             paintPoints(gc, v, p, area);
+        }
+    }
+
+    /**
+     * Writes the names of this layer's areas that are big enough on the screen to hold them
+     * ({@link #MIN_NAMED_PX} across). Called by the place-names layer, above all chart data.
+     *
+     * @param frame the frame
+     */
+    public void paintNames(Frame frame) {
+        GraphicsContext gc = frame.gc();
+        Viewport v = frame.viewport();
+        Palette p = frame.palette();
+        Envelope area = v.areaM();
+        if (layer.labels().isEmpty()) {
+            return;
+        }
+        gc.setFont(NAME_FONT);
+        gc.setTextAlign(javafx.scene.text.TextAlignment.CENTER);
+        gc.setTextBaseline(javafx.geometry.VPos.CENTER);
+        gc.setFill(p.ink().deriveColor(0, 1, 1, 0.75));
+        for (PreparedLayer.NameLabel l : layer.labels()) {
+            if (l.sizeM() / v.metresPerPx() >= MIN_NAMED_PX && area.contains(l.xM(), l.yM())) {
+                gc.fillText(l.text(), v.screenX(l.xM()), v.screenY(l.yM()));
+            }
         }
     }
 

@@ -65,6 +65,8 @@ class ChartPixelTest {
             HeadlessChart hc = new HeadlessChart(chart, Palette.DAY, false);
             hc.model().layers().stream().filter(l -> l.name().equals("Graticule"))
                     .forEach(l -> l.visibleProperty().set(graticule));
+            hc.model().layers().stream().filter(l -> l.name().equals("Place names"))
+                    .forEach(l -> l.visibleProperty().set(false));
             BufferedImage img = hc.render(v);
             hc.close();
             return img;
