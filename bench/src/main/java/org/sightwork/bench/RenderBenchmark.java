@@ -112,7 +112,7 @@ public final class RenderBenchmark {
             {"north atlantic", Viewport.fitting(20, -60, 55, 0, w, h)},
             {"demo region", first},
             {"faial-pico channel", Viewport.fitting(38.40, -28.80, 38.60, -28.40, w, h)},
-            {"horta harbour (~2 m/px)", new Viewport(first.centreXM(), first.centreYM(), 2, w, h)},
+            {"harbour, Faial (~1.4 m/px)", null},
         };
         // harbour: centre on Faial's east coast
         zooms[4][1] = Viewport.fitting(38.52, -28.64, 38.545, -28.61, w, h);

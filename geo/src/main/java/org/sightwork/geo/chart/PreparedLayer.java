@@ -44,6 +44,8 @@ public final class PreparedLayer {
     private static final double COARSEST_M_PER_PX = 20_000.0;
     /** Each band is this many times finer than the one before. */
     private static final double BAND_RATIO = 4.0;
+    /** Fraction of the half-pixel tolerance used at each step of the cascade (see {@link #generalise()}). */
+    private static final double CASCADE_FRACTION = 0.75;
     /** Number of simplified bands; one more band holds the full resolution. */
     private static final int SIMPLIFIED_BANDS = 7;
 
@@ -136,7 +138,7 @@ public final class PreparedLayer {
         }
         List<Geometry> previous = projected;
         for (int b = SIMPLIFIED_BANDS - 1; b >= 0; b--) {
-            double tolM = 0.75 * 0.5 * bandMetresPerPixel(b);
+            double tolM = CASCADE_FRACTION * 0.5 * bandMetresPerPixel(b);
             List<Geometry> simplified = new ArrayList<>(previous.size());
             for (Geometry g : previous) {
                 if (g.getDimension() > 0 && !g.isEmpty()) {
