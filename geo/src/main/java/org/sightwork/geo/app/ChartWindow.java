@@ -534,6 +534,26 @@ final class ChartWindow implements Shell {
         map.showArea(southDeg, westDeg, northDeg, eastDeg);
     }
 
+    MapView mapView() {
+        return map;
+    }
+
+    MenuBar menuBar() {
+        return menuBar;
+    }
+
+    VBox dock() {
+        return dock;
+    }
+
+    Label rangeLabel() {
+        return rangeLabel;
+    }
+
+    Label cursorLabel() {
+        return cursorLabel;
+    }
+
     List<String> pluginNames() {
         return new ArrayList<>(plugins.names());
     }
