@@ -68,6 +68,23 @@ public final class BundledChart {
     }
 
     /**
+     * The place-names row: the names of every visible chart layer's areas, above all chart data.
+     *
+     * @param model the model whose chart layers are named
+     * @return the row
+     */
+    static LayerEntry namesEntry(ChartModel model) {
+        return new LayerEntry("Place names", LayerEntry.Kind.NAMES, frame -> {
+            for (LayerEntry e : model.layers()) {
+                if (e.kind() == LayerEntry.Kind.CHART && e.visibleProperty().get()
+                        && e.renderer() instanceof org.sightwork.geo.render.VectorLayerRenderer r) {
+                    r.paintNames(frame);
+                }
+            }
+        });
+    }
+
+    /**
      * The graticule row.
      *
      * @return the row

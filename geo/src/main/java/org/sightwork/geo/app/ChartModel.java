@@ -67,6 +67,17 @@ public final class ChartModel {
     }
 
     /**
+     * Adds chart layers below every other layer (a base chart that arrives after the detail).
+     *
+     * @param entries the new layers, in painting order (bottom first)
+     */
+    public void addBaseChartLayers(List<LayerEntry> entries) {
+        for (LayerEntry e : entries) {
+            layers.add(layers.size() - entries.indexOf(e), e);
+        }
+    }
+
+    /**
      * The palette.
      *
      * @return the property

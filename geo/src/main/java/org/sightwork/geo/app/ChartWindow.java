@@ -88,6 +88,7 @@ final class ChartWindow implements Shell {
         this.stage = stage;
         map = new MapView(model, this, cursorLabel::setText, rangeLabel::setText);
         model.layers().add(BundledChart.graticuleEntry());
+        model.layers().add(0, BundledChart.namesEntry(model));
         model.layers().addListener((javafx.collections.ListChangeListener<LayerEntry>) c -> {
             while (c.next()) {
                 for (LayerEntry e : c.getAddedSubList()) {
@@ -181,13 +182,23 @@ final class ChartWindow implements Shell {
                         + "%d ms after the JVM started%n", (System.nanoTime() - t0) / 1e6, sinceJvm);
             }
         });
-        tasks.submit("Opening the bundled chart", p -> ChartSet.load(files, true, f -> p.update(f, null)))
+        // The detailed region first (it is what the first view shows), then the world base under it,
+        // cut away where the region lies.
+        Path detail = files.get(files.size() - 1);
+        List<Path> base = files.subList(0, files.size() - 1);
+        tasks.submit("Opening the bundled chart", p -> ChartSet.load(List.of(detail), false, f -> p.update(f, null)))
                 .thenAcceptAsync(chart -> {
-                    addChart(chart);
+                    addChart(chart, false);
                     Envelope d = chart.detailExtentDeg();
                     if (!d.isNull()) {
-                        d.expandBy(Math.max(d.getWidth(), d.getHeight()) * 0.05);
-                        map.showArea(d.getMinY(), d.getMinX(), d.getMaxY(), d.getMaxX());
+                        Envelope view = new Envelope(d);
+                        view.expandBy(Math.max(d.getWidth(), d.getHeight()) * 0.05);
+                        map.showArea(view.getMinY(), view.getMinX(), view.getMaxY(), view.getMaxX());
+                    }
+                    if (!base.isEmpty()) {
+                        Envelope mask = d.isNull() ? null : d;
+                        tasks.submit("Opening the world base", p -> ChartSet.loadUnder(base, mask, f -> p.update(f, null)))
+                                .thenAcceptAsync(world -> addChart(world, true), Platform::runLater);
                     }
                 }, Platform::runLater);
     }
@@ -215,7 +226,7 @@ final class ChartWindow implements Shell {
     void openChartFile(Path file) {
         tasks.submit("Opening " + file.getFileName(), p -> ChartSet.load(List.of(file), false, f -> p.update(f, null)))
                 .thenAcceptAsync(chart -> {
-                    addChart(chart);
+                    addChart(chart, false);
                     if (!chart.layers().isEmpty()) {
                         notify(Severity.INFO, "Opened " + file.getFileName() + ": " + chart.layers().size()
                                 + " layer(s)");
@@ -224,8 +235,19 @@ final class ChartWindow implements Shell {
                 }, Platform::runLater);
     }
 
-    private void addChart(ChartSet chart) {
-        model.addChartLayers(BundledChart.entriesOf(chart.layers()));
+    private void addChart(ChartSet chart, boolean underneath) {
+        if (underneath) {
+            model.addBaseChartLayers(BundledChart.entriesOf(chart.layers()));
+        } else {
+            model.addChartLayers(BundledChart.entriesOf(chart.layers()));
+        }
+        if (!chart.layers().isEmpty()) {
+            tasks.submit("Preparing the chart for every zoom", p -> {
+                chart.generalise(f -> p.update(f, null));
+                requestRepaint();
+                return null;
+            });
+        }
         if (!chart.extentDeg().isNull()) {
             dataExtent.expandToInclude(chart.extentDeg());
         }
@@ -510,6 +532,26 @@ final class ChartWindow implements Shell {
     @Override
     public void showArea(double southDeg, double westDeg, double northDeg, double eastDeg) {
         map.showArea(southDeg, westDeg, northDeg, eastDeg);
+    }
+
+    MapView mapView() {
+        return map;
+    }
+
+    MenuBar menuBar() {
+        return menuBar;
+    }
+
+    VBox dock() {
+        return dock;
+    }
+
+    Label rangeLabel() {
+        return rangeLabel;
+    }
+
+    Label cursorLabel() {
+        return cursorLabel;
     }
 
     List<String> pluginNames() {

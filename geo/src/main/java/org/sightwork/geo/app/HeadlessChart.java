@@ -38,6 +38,7 @@ public final class HeadlessChart implements Shell {
      */
     public HeadlessChart(ChartSet chart, Palette palette, boolean startPlugins) {
         model.layers().add(BundledChart.graticuleEntry());
+        model.layers().add(0, BundledChart.namesEntry(model));
         model.addChartLayers(BundledChart.entriesOf(chart.layers()));
         model.paletteProperty().set(palette);
         if (startPlugins) {

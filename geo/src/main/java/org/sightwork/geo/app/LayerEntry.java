@@ -17,6 +17,8 @@ public final class LayerEntry {
         CHART,
         /** The graticule. */
         GRATICULE,
+        /** Names of places, from the chart data. */
+        NAMES,
         /** A plugin's overlay. */
         OVERLAY
     }

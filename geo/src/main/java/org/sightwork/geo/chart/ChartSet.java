@@ -24,6 +24,14 @@ import org.locationtech.jts.geom.Envelope;
 public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, Envelope extentDeg,
         Envelope detailExtentDeg) {
 
+    /**
+     * How far beyond the detailed data's extent a coarser layer is cut away (degrees): a coarse
+     * outline may stand a few kilometres out from the detailed one (Natural Earth 1:10 m against
+     * GSHHG full resolution: up to about 2 km at the demo islands), 0.25° is well beyond that and
+     * still far inside the open sea around a detailed region.
+     */
+    public static final double MASK_MARGIN_DEG = 0.25;
+
     /** Copies. */
     public ChartSet {
         layers = List.copyOf(layers);
@@ -66,7 +74,8 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
             if (maskByDetail) {
                 for (int j = nf - 1; j > i; j--) {
                     if (!extents.get(j).isNull()) {
-                        mask = extents.get(j);
+                        mask = new Envelope(extents.get(j));
+                        mask.expandBy(MASK_MARGIN_DEG);
                         break;
                     }
                 }
@@ -85,6 +94,54 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
         }
         progress.accept(1.0);
         return new ChartSet(prepared, problems, all, detail);
+    }
+
+    /**
+     * Reads and prepares chart files, cut back where a given area is covered by something more
+     * detailed (the world base under the detailed region, read second so that the first frame need
+     * not wait for it). Slow: call from a worker thread.
+     *
+     * @param files the files, least detailed first
+     * @param detailDeg the extent of the detailed data (degrees), cut out of every layer with a margin
+     *     of {@link #MASK_MARGIN_DEG}; or null
+     * @param progress receives the fraction done, [0, 1]
+     * @return the chart
+     */
+    public static ChartSet loadUnder(List<Path> files, Envelope detailDeg, DoubleConsumer progress) {
+        Envelope maskDeg = null;
+        if (detailDeg != null && !detailDeg.isNull()) {
+            maskDeg = new Envelope(detailDeg);
+            maskDeg.expandBy(MASK_MARGIN_DEG);
+        }
+        List<ChartProblem> problems = new ArrayList<>();
+        List<PreparedLayer> prepared = new ArrayList<>();
+        Envelope all = new Envelope();
+        for (int i = 0; i < files.size(); i++) {
+            int k = i;
+            ChartData d = ChartFiles.read(files.get(i), f -> progress.accept(0.7 * (k + f) / files.size()));
+            problems.addAll(d.problems());
+            List<ChartLayer> layers = new ArrayList<>(d.layers());
+            layers.sort(Comparator.comparingInt(l -> drawOrder(l.featureClass())));
+            for (ChartLayer l : layers) {
+                prepared.add(PreparedLayer.prepare(l, maskDeg));
+                all.expandToInclude(l.extentDeg());
+            }
+        }
+        progress.accept(1.0);
+        return new ChartSet(prepared, problems, all, all);
+    }
+
+    /**
+     * Generalises every layer for the coarser zoom bands ({@link PreparedLayer#generalise()}). Slow:
+     * call from a worker thread after the first frame; drawing goes on meanwhile.
+     *
+     * @param progress receives the fraction done, [0, 1]
+     */
+    public void generalise(DoubleConsumer progress) {
+        for (int i = 0; i < layers.size(); i++) {
+            layers.get(i).generalise();
+            progress.accept((i + 1.0) / layers.size());
+        }
     }
 
     private static int drawOrder(FeatureClass c) {

@@ -12,12 +12,19 @@ import org.sightwork.geo.chart.PreparedLayer;
  * Paints a prepared chart layer in the style of its feature class: the band for the scale in view,
  * the parts the spatial index finds in view, one path per layer (so that a tiled land layer shows
  * no seams), filled with the even-odd rule (holes and islands in lakes come out right without
- * knowing which ring is which).
+ * knowing which ring is which). Rings and lines under {@link #MIN_PART_PX} across are skipped: at
+ * the world scale they are most of the vertices and none of the picture.
  *
  * <p><b>Thread:</b> that of the graphics context. Allocates nothing per vertex.
  */
 public final class VectorLayerRenderer implements RenderLayer {
 
+    /** Rings and lines smaller than this across, both ways, are not drawn (pixels). */
+    static final double MIN_PART_PX = 0.8;
+    /** An area is named when it is at least this big on the screen (pixels). */
+    static final double MIN_NAMED_PX = 70;
+    private static final javafx.scene.text.Font NAME_FONT = javafx.scene.text.Font.font("System",
+            javafx.scene.text.FontPosture.ITALIC, 12);
     private final PreparedLayer layer;
     private final FeatureClass featureClass;
     private int lastVertices;
@@ -60,10 +67,13 @@ public final class VectorLayerRenderer implements RenderLayer {
         area.expandBy(PathBuilder.GUARD_PX * v.metresPerPx());
         int[] count = {0};
         boolean[] anyPoints = {false};
+        double minSizeM = MIN_PART_PX * v.metresPerPx();
         gc.beginPath();
         layer.query(band, area, part -> {
             if (part.n() == 1) {
                 anyPoints[0] = true;
+            } else if (part.widthM() < minSizeM && part.heightM() < minSizeM) {
+                return; // smaller than a pixel: an islet or a pond that would not show
             } else {
                 count[0] += PathBuilder.append(gc, v, part.xy(), part.n(), part.closed(), 0);
             }
@@ -91,6 +101,31 @@ public final class VectorLayerRenderer implements RenderLayer {
         }
         if (anyPoints[0]) {
             paintPoints(gc, v, p, area);
+        }
+    }
+
+    /**
+     * Writes the names of this layer's areas that are big enough on the screen to hold them
+     * ({@link #MIN_NAMED_PX} across). Called by the place-names layer, above all chart data.
+     *
+     * @param frame the frame
+     */
+    public void paintNames(Frame frame) {
+        GraphicsContext gc = frame.gc();
+        Viewport v = frame.viewport();
+        Palette p = frame.palette();
+        Envelope area = v.areaM();
+        if (layer.labels().isEmpty()) {
+            return;
+        }
+        gc.setFont(NAME_FONT);
+        gc.setTextAlign(javafx.scene.text.TextAlignment.CENTER);
+        gc.setTextBaseline(javafx.geometry.VPos.CENTER);
+        gc.setFill(p.ink().deriveColor(0, 1, 1, 0.75));
+        for (PreparedLayer.NameLabel l : layer.labels()) {
+            if (l.sizeM() / v.metresPerPx() >= MIN_NAMED_PX && area.contains(l.xM(), l.yM())) {
+                gc.fillText(l.text(), v.screenX(l.xM()), v.screenY(l.yM()));
+            }
         }
     }
 

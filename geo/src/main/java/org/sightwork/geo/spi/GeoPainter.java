@@ -40,7 +40,7 @@ public interface GeoPainter {
 
     /**
      * The shorter great-circle arc between two positions (on the sphere), densified so that it
-     * stays within a quarter pixel of the true curve.
+     * has chords of at most 3 pixels on the screen.
      *
      * @param from start
      * @param to end; not antipodal to the start
@@ -71,8 +71,8 @@ public interface GeoPainter {
 
     /**
      * An ellipse given in nautical miles about its centre, such as the error ellipse of a fix.
-     * Computed in the plane tangent at the centre, which is exact to better than 0.1 % for
-     * semi-axes under 60 nm away from the poles.
+     * Laid out flat about the centre (1′ of latitude = 1 nm, 1′ of longitude = cos φ nm): right for
+     * the few-mile ellipse of a fix; not meant for ellipses of hundreds of miles or near a pole.
      *
      * @param centre the centre
      * @param semiMajorNm the semi-major axis (nautical miles, &gt; 0)
@@ -96,8 +96,8 @@ public interface GeoPainter {
     void marker(GeoPosition at, MarkerShape shape, double sizePx, Stroke stroke, Color fill);
 
     /**
-     * A text label whose top-left corner is offset from a position (on a halo of the chart's
-     * background colour so that it reads on land and sea).
+     * A text label whose top-left corner is offset from a position (on a box of the chart's
+     * halo colour so that it reads on land and sea).
      *
      * @param at the position labelled
      * @param text the text (one line)

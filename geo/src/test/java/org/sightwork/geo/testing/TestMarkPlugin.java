@@ -32,11 +32,23 @@ public final class TestMarkPlugin implements ChartPlugin {
         return "Test marks";
     }
 
+    /** The last chart click heard (for tests). */
+    public static volatile GeoPosition lastClick;
+    /** The last passage time heard (for tests). */
+    public static volatile java.time.Instant lastTime;
+    /** How often the test command ran (for tests). */
+    public static final java.util.concurrent.atomic.AtomicInteger COMMAND_RUNS =
+            new java.util.concurrent.atomic.AtomicInteger();
+
     @Override
     public void start(PluginContext context) {
         context.addOverlay(OVERLAY, p -> {
             p.smallCircle(CENTRE, RADIUS_NM, Stroke.solid(CIRCLE, 3));
             p.marker(CENTRE, MarkerShape.SQUARE, MARKER_PX, null, MARK);
         });
+        context.addChartClickListener(pos -> lastClick = pos);
+        context.passageTime().addListener((o, a, t) -> lastTime = t);
+        context.addPanel("Test panel", new javafx.scene.control.Label("test plugin panel"));
+        context.addCommand("Test", "Count", COMMAND_RUNS::incrementAndGet);
     }
 }
