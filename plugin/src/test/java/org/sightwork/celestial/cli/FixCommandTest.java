@@ -129,4 +129,31 @@ class FixCommandTest {
         assertTrue(Sphere.distanceNm(truth, p) < fix.get("ellipse95").get("majorNm").asDouble(),
                 "running fix near the invented truth: " + Sphere.distanceNm(truth, p));
     }
+
+    @Test
+    void noonSightAndPolarisGiveTheLatitudeAndNoonIsPredicted() throws Exception {
+        // Exact sights from a chosen position: the Sun at the local apparent noon predicted from
+        // the almanac, Polaris at night; reduce prints both latitudes, equal to the truth to 0.1'.
+        GeoPosition truth = GeoPosition.of(38.5, -35.0);
+        var almanac = org.sightwork.celestial.almanac.Almanac.standard();
+        org.sightwork.celestial.reduction.GhaDecSource sun = t -> {
+            var p = almanac.position(org.sightwork.celestial.almanac.Body.SUN,
+                    org.sightwork.celestial.time.AstroTime.ofUtc(t));
+            return new org.sightwork.celestial.reduction.GhaDecSource.GhaDec(p.ghaDeg(), p.decDeg());
+        };
+        Instant noon = org.sightwork.celestial.reduction.LocalApparentNoon.next(Instant.parse("2025-03-14T06:00:00Z"),
+                truth, 0.0, 0.0, sun).utc();
+        List<ExampleLog.Planned> plan = List.of(new ExampleLog.Planned("Polaris", "", Instant.parse("2025-03-14T23:00:00Z")),
+                new ExampleLog.Planned("Sun", "LOWER", noon));
+        Path log = dir.resolve("lat.csv");
+        Files.writeString(log, ExampleLog.csv(truth, noon, 0.0, 0.0, 0.0, plan, 0.0, 1L));
+        Run r = run("reduce", log.toString(), "--format", "json", "--noon");
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        String lat = org.sightwork.geo.earth.Angles.formatLatitude(truth.latDeg());
+        assertEquals("latitude by Polaris " + lat, root.get("sights").get(0).get("latitude").asText(), r.out());
+        assertEquals("latitude by meridian altitude " + lat, root.get("sights").get(1).get("latitude").asText(), r.out());
+        // The next noon after the last sight (hove-to at the truth) is a day later, within 30 s.
+        Instant next = Instant.parse(root.get("noon").get("utc").asText());
+        assertEquals(86400.0, java.time.Duration.between(noon, next).toSeconds(), 30.0, "next day's noon");
+    }
 }
