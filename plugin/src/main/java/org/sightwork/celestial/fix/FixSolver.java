@@ -131,6 +131,15 @@ public final class FixSolver {
                 break;
             }
             rejected[worst] = true;
+            if (sectorDeg(lines, rejected) < options.refuseCrossingDeg()) {
+                // Leaving it out would leave no fix: keep it and say so.
+                rejected[worst] = false;
+                warnings.add(String.format(Locale.ROOT,
+                        "%s: residual %.1f nm is %.1f times its expected spread, but without it the other lines "
+                                + "cross too shallow for a fix: kept; check it", lines.get(worst).label(),
+                        sol.residual[worst], Math.abs(sol.normalised[worst])));
+                break;
+            }
             reasons[worst] = String.format(Locale.ROOT,
                     "residual %.1f nm is %.1f times its expected spread (limit %.1f): left out of the fix; "
                             + "check the reading, the time and the body's name",

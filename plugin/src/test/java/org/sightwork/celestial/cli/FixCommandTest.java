@@ -156,4 +156,36 @@ class FixCommandTest {
         Instant next = Instant.parse(root.get("noon").get("utc").asText());
         assertEquals(86400.0, java.time.Duration.between(noon, next).toSeconds(), 30.0, "next day's noon");
     }
+
+    @Test
+    void severalShotsOfOneBodyAreFittedAndTheBadShotLeftOut() throws Exception {
+        // Exact shots from a chosen position; one shot of Sirius made 6' high by hand. With
+        // --average-min the five Sirius shots become one fitted sight, the bad one left out, and
+        // the fix comes back to the truth (the remaining shots are exact: within 0.02 nm).
+        GeoPosition truth = GeoPosition.of(20.0, 60.0);
+        Instant t = Instant.parse("2025-03-14T15:00:00Z");
+        List<ExampleLog.Planned> plan = new java.util.ArrayList<>();
+        for (int i = 0; i < 5; i++) {
+            plan.add(new ExampleLog.Planned("Sirius", "", t.plusSeconds(45L * i)));
+        }
+        plan.add(new ExampleLog.Planned("Canopus", "", t.plusSeconds(300)));
+        plan.add(new ExampleLog.Planned("Rigel", "", t.plusSeconds(360)));
+        plan.add(new ExampleLog.Planned("Procyon", "", t.plusSeconds(420)));
+        plan = plan.stream().filter(p -> visible(p, truth)).toList();
+        String[] rows = ExampleLog.csv(truth, t, 90.0, 5.0, 2.0, plan, 0.0, 1L).split("\n");
+        String[] cells = rows[3].split(",");
+        cells[3] = String.format(java.util.Locale.ROOT, "%.8f", Double.parseDouble(cells[3]) + 0.1);
+        rows[3] = String.join(",", cells);
+        Path log = dir.resolve("shots.csv");
+        Files.writeString(log, String.join("\n", rows) + "\n");
+        Run r = run("fix", log.toString(), "--format", "json", "--average-min", "5");
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        assertTrue(root.get("averaged").get(0).asText().contains("left out"), r.out());
+        JsonNode fix = root.get("fixes").get(0);
+        assertEquals(plan.size() - 4, fix.get("sights").size(), "one line for the five Sirius shots");
+        GeoPosition p = GeoPosition.of(fix.get("latDeg").asDouble(), fix.get("lonDeg").asDouble());
+        GeoPosition truthAtFix = Sphere.rhumb(truth, 90.0, 5.0 * java.time.Duration.between(t,
+                Instant.parse(fix.get("utc").asText())).toSeconds() / 3600.0);
+        assertEquals(0.0, Sphere.distanceNm(truthAtFix, p), 0.02, r.out());
+    }
 }
