@@ -25,8 +25,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code sightwork reduce LOG.csv}: each sight's worksheet, from Hs to the intercept. */
 @Command(name = "reduce", mixinStandardHelpOptions = true,
-        description = {"Works every sight of a sight log: each correction from Hs to Ho, then GHA, Dec,",
-                "LHA, Hc, Zn and the intercept from the DR (or the AP given)."},
+        description = {"Works every sight of a sight log: each correction from Hs to Ho, then GHA, Dec, "
+                + "LHA, Hc, Zn and the intercept from the DR (or the AP given); a latitude for Polaris and "
+                + "meridian sights."},
         footer = {"", Caution.TEXT})
 public final class ReduceCommand implements Callable<Integer> {
 
@@ -92,7 +93,8 @@ public final class ReduceCommand implements Callable<Integer> {
             case TEXT -> {
                 lan.ifPresent(n -> out.printf(Locale.ROOT,
                         "Next local apparent noon %s at DR %s: Sun's centre on the meridian at %s (Dec %s)%n%n",
-                        n.utc(), n.position(), Angles.formatDm(n.meridianAltitudeDeg(), 2),
+                        n.utc().plusMillis(500).truncatedTo(java.time.temporal.ChronoUnit.SECONDS), n.position(),
+                        Angles.formatDm(n.meridianAltitudeDeg(), 2),
                         Angles.formatDeclination(n.sunDecDeg())));
                 text(in, out);
             }

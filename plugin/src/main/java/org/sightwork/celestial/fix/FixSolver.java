@@ -19,9 +19,9 @@ import org.sightwork.geo.earth.GeoPosition;
  * <p><b>Method.</b> Gauss-Newton on the circles of equal altitude: at the current estimate X each
  * sight is carried back along the DR to its own time, re-reduced there (its intercept pᵢ is
  * Ho - Hc), and the linear model pᵢ = aᵢ·δ with aᵢ = (sin Zn, cos Zn) is solved by generalised
- * least squares δ = (AᵀC⁻¹A)⁻¹AᵀC⁻¹p; X moves by δ along a great circle; repeat until |δ| <
- * 0.01 nm (the method of Kaplan, "Determining the position and motion of a vessel from celestial
- * observations", Navigation 42 (1995) 631, in its least-squares form; the linear algebra in any
+ * least squares δ = (AᵀC⁻¹A)⁻¹AᵀC⁻¹p; X moves by δ along a great circle; repeat until |δ| &lt;
+ * 0.01 nm (the method of G. H. Kaplan, "Determining the position and motion of a vessel from
+ * celestial observations", Navigation, J. Inst. of Navigation, 42 (1995), reference from memory; the linear algebra in any
  * text, e.g. Strang, <i>Linear Algebra and its Applications</i>, 4th ed., §3.3).
  *
  * <p>The covariance of the intercepts is C = diag(σᵢ²) + V Vᵀ with Vᵢ = k dᵢ sᵢ aᵢ: the DR error
