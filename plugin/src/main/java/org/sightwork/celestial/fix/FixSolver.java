@@ -231,8 +231,9 @@ public final class FixSolver {
             double dn = qen * rhs[0] + qnn * rhs[1];
             s.covariance = new PositionCovariance(qee, qnn, qen);
             s.iterations = it;
-            if (Math.hypot(de, dn) < options.convergenceNm() || it > options.maxIterations()) {
-                s.converged = Math.hypot(de, dn) < options.convergenceNm();
+            double stepNm = Math.sqrt(de * de + dn * dn);
+            if (stepNm < options.convergenceNm() || it > options.maxIterations()) {
+                s.converged = stepNm < options.convergenceNm();
                 // The residuals above were taken at pos; the last step is below the tolerance.
                 break;
             }
