@@ -37,9 +37,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code sightwork fix LOG.csv}: groups the sights into fixes and prints each with its ellipse. */
 @Command(name = "fix", mixinStandardHelpOptions = true,
-        description = {"Groups the sights of a sight log into fixes (sights within the window make one fix",
-                "at their mean time, the others advanced along the DR) and prints each fix with its 95%",
-                "error ellipse, every sight's residual and the warnings."},
+        description = {"Groups the sights of a sight log into fixes (sights within the window make one fix "
+                + "at their mean time, the others advanced along the DR) and prints each fix with its 95%% "
+                + "error ellipse, every sight's residual and the warnings."},
         footer = {"", Caution.TEXT})
 public final class FixCommand implements Callable<Integer> {
 

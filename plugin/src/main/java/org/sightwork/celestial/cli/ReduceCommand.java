@@ -9,6 +9,10 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.sightwork.celestial.io.LogProblem;
+import org.sightwork.celestial.reduction.GhaDecSource;
+import org.sightwork.celestial.reduction.LocalApparentNoon;
+import org.sightwork.celestial.reduction.MeridianAltitude;
+import org.sightwork.celestial.reduction.PolarisLatitude;
 import org.sightwork.celestial.reduction.ReducedSight;
 import org.sightwork.celestial.sight.Worksheet;
 import org.sightwork.geo.app.Caution;
@@ -21,8 +25,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code sightwork reduce LOG.csv}: each sight's worksheet, from Hs to the intercept. */
 @Command(name = "reduce", mixinStandardHelpOptions = true,
-        description = {"Works every sight of a sight log: each correction from Hs to Ho, then GHA, Dec,",
-                "LHA, Hc, Zn and the intercept from the DR (or the AP given)."},
+        description = {"Works every sight of a sight log: each correction from Hs to Ho, then GHA, Dec, "
+                + "LHA, Hc, Zn and the intercept from the DR (or the AP given); a latitude for Polaris and "
+                + "meridian sights."},
         footer = {"", Caution.TEXT})
 public final class ReduceCommand implements Callable<Integer> {
 
@@ -38,8 +43,44 @@ public final class ReduceCommand implements Callable<Integer> {
     @Option(names = "--dut1", defaultValue = "0", paramLabel = "SECONDS", description = "DUT1 = UT1 - UTC (s, within ±0.9; default 0)")
     double dut1;
 
+    @Option(names = "--noon", description = "also predict the next local apparent noon after the last sight, "
+            + "from its DR, course and speed")
+    boolean noon;
+
     @Spec
     CommandSpec spec;
+
+    /** Latitude by Polaris, or by meridian altitude when the body is within 1 min of time of the meridian. */
+    static java.util.Optional<String> latitudeLine(ReducedSight r) {
+        double ho = r.worksheet().hoDeg();
+        double lon = r.lop().ap().lonDeg();
+        if (r.position().body().name().equalsIgnoreCase("Polaris")) {
+            double lat = PolarisLatitude.latitudeDeg(ho, r.position().ghaDeg(), r.position().decDeg(), lon,
+                    r.lop().ap().latDeg());
+            return java.util.Optional.of("latitude by Polaris " + Angles.formatLatitude(lat));
+        }
+        double lha = r.computed().lhaDeg();
+        double dec = r.position().decDeg();
+        if (Math.min(lha, 360.0 - lha) < MERIDIAN_LHA_DEG) {
+            double lat = MeridianAltitude.latitudeDeg(ho, dec, MeridianAltitude.Transit.UPPER,
+                    MeridianAltitude.bearingFromDr(r.lop().ap().latDeg(), dec));
+            return java.util.Optional.of("latitude by meridian altitude " + Angles.formatLatitude(lat));
+        }
+        if (Math.abs(lha - 180.0) < MERIDIAN_LHA_DEG && ho > 0.0
+                && Math.signum(dec) == Math.signum(r.lop().ap().latDeg())) {
+            double lat = MeridianAltitude.latitudeDeg(ho, dec, MeridianAltitude.Transit.LOWER,
+                    dec >= 0 ? MeridianAltitude.Bearing.NORTH : MeridianAltitude.Bearing.SOUTH);
+            return java.util.Optional.of("latitude by meridian altitude (lower transit) " + Angles.formatLatitude(lat));
+        }
+        return java.util.Optional.empty();
+    }
+
+    /**
+     * Within this LHA of the meridian (degrees; 1 minute of time) a sight is worked as a meridian
+     * altitude too: the ex-meridian error is then under 0.05′ below 80° altitude
+     * (Δh ≈ cos φ cos δ (1 - cos t) / sin z).
+     */
+    static final double MERIDIAN_LHA_DEG = 0.25;
 
     @Override
     public Integer call() throws Exception {
@@ -47,16 +88,43 @@ public final class ReduceCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         SightInput in = SightInput.load(log, SightInput.parseAp(ap), dut1);
         in.reportProblems(err);
+        java.util.Optional<LocalApparentNoon.Noon> lan = noon ? predictNoon(in, err) : java.util.Optional.empty();
         switch (format) {
-            case TEXT -> text(in, out);
+            case TEXT -> {
+                lan.ifPresent(n -> out.printf(Locale.ROOT,
+                        "Next local apparent noon %s at DR %s: Sun's centre on the meridian at %s (Dec %s)%n%n",
+                        n.utc().plusMillis(500).truncatedTo(java.time.temporal.ChronoUnit.SECONDS), n.position(),
+                        Angles.formatDm(n.meridianAltitudeDeg(), 2),
+                        Angles.formatDeclination(n.sunDecDeg())));
+                text(in, out);
+            }
             case CSV -> csv(in, out);
-            case JSON -> json(in, out);
+            case JSON -> json(in, out, lan);
         }
         out.flush();
         if (in.reduced.isEmpty()) {
             return 1;
         }
         return in.problems.isEmpty() ? 0 : 2;
+    }
+
+    private java.util.Optional<LocalApparentNoon.Noon> predictNoon(SightInput in, PrintWriter err) {
+        if (in.reduced.isEmpty()) {
+            return java.util.Optional.empty();
+        }
+        ReducedSight last = in.reduced.stream().max(java.util.Comparator.comparing(r -> r.lop().utc())).orElseThrow();
+        var s = last.worksheet().sight();
+        var almanac = org.sightwork.celestial.almanac.Almanac.standard();
+        GhaDecSource sun = t -> {
+            var p = almanac.position(org.sightwork.celestial.almanac.Body.SUN,
+                    org.sightwork.celestial.time.AstroTime.ofUtc(t, dut1));
+            return new GhaDecSource.GhaDec(p.ghaDeg(), p.decDeg());
+        };
+        if (s.courseDeg().isEmpty() || s.speedKn().isEmpty()) {
+            err.println("noon: the last sight gives no course and speed; noon predicted for the DR hove-to");
+        }
+        return java.util.Optional.of(LocalApparentNoon.next(s.utc(), last.lop().ap(), s.courseDeg().orElse(0.0),
+                s.speedKn().orElse(0.0), sun));
     }
 
     private static void text(SightInput in, PrintWriter out) {
@@ -88,6 +156,7 @@ public final class ReduceCommand implements Callable<Integer> {
                     Angles.formatDm(r.computed().hcDeg(), 2), r.computed().znDeg());
             out.printf(Locale.ROOT, "  intercept %.1f nm %s%n", Math.abs(r.lop().interceptNm()),
                     r.lop().isToward() ? "toward" : "away");
+            latitudeLine(r).ifPresent(l -> out.println("  " + l));
             for (String warning : r.warnings()) {
                 out.println("  warning: " + warning);
             }
@@ -115,7 +184,8 @@ public final class ReduceCommand implements Callable<Integer> {
         return new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     }
 
-    private static void json(SightInput in, PrintWriter out) throws Exception {
+    private static void json(SightInput in, PrintWriter out, java.util.Optional<LocalApparentNoon.Noon> lan)
+            throws Exception {
         ObjectMapper m = mapper();
         ObjectNode root = m.createObjectNode();
         ArrayNode sights = root.putArray("sights");
@@ -144,9 +214,18 @@ public final class ReduceCommand implements Callable<Integer> {
             s.put("hcDeg", r.computed().hcDeg());
             s.put("znDeg", r.computed().znDeg());
             s.put("interceptNm", r.lop().interceptNm());
+            latitudeLine(r).ifPresent(l -> s.put("latitude", l));
             ArrayNode warnings = s.putArray("warnings");
             r.warnings().forEach(warnings::add);
         }
+        lan.ifPresent(n -> {
+            ObjectNode o = root.putObject("noon");
+            o.put("utc", n.utc().toString());
+            o.put("latDeg", n.position().latDeg());
+            o.put("lonDeg", n.position().lonDeg());
+            o.put("meridianAltitudeDeg", n.meridianAltitudeDeg());
+            o.put("sunDecDeg", n.sunDecDeg());
+        });
         problems(root, in);
         out.println(m.writeValueAsString(root));
     }

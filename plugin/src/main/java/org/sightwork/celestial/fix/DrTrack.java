@@ -76,6 +76,10 @@ public record DrTrack(List<Leg> legs) {
             return p;
         }
         boolean forward = to.isAfter(from);
+        if (legs.size() == 1) {
+            double hours = Duration.between(from, to).toNanos() / 3.6e12;
+            return Sphere.rhumb(p, legs.get(0).courseDeg(), legs.get(0).speedKn() * hours);
+        }
         Instant a = forward ? from : to;
         Instant b = forward ? to : from;
         List<double[]> pieces = new ArrayList<>(); // {course, distance} in time order

@@ -19,9 +19,9 @@ import org.sightwork.geo.earth.GeoPosition;
  * <p><b>Method.</b> Gauss-Newton on the circles of equal altitude: at the current estimate X each
  * sight is carried back along the DR to its own time, re-reduced there (its intercept pᵢ is
  * Ho - Hc), and the linear model pᵢ = aᵢ·δ with aᵢ = (sin Zn, cos Zn) is solved by generalised
- * least squares δ = (AᵀC⁻¹A)⁻¹AᵀC⁻¹p; X moves by δ along a great circle; repeat until |δ| <
- * 0.01 nm (the method of Kaplan, "Determining the position and motion of a vessel from celestial
- * observations", Navigation 42 (1995) 631, in its least-squares form; the linear algebra in any
+ * least squares δ = (AᵀC⁻¹A)⁻¹AᵀC⁻¹p; X moves by δ along a great circle; repeat until |δ| &lt;
+ * 0.01 nm (the method of G. H. Kaplan, "Determining the position and motion of a vessel from
+ * celestial observations", Navigation, J. Inst. of Navigation, 42 (1995), reference from memory; the linear algebra in any
  * text, e.g. Strang, <i>Linear Algebra and its Applications</i>, 4th ed., §3.3).
  *
  * <p>The covariance of the intercepts is C = diag(σᵢ²) + V Vᵀ with Vᵢ = k dᵢ sᵢ aᵢ: the DR error
@@ -131,6 +131,15 @@ public final class FixSolver {
                 break;
             }
             rejected[worst] = true;
+            if (sectorDeg(lines, rejected) < options.refuseCrossingDeg()) {
+                // Leaving it out would leave no fix: keep it and say so.
+                rejected[worst] = false;
+                warnings.add(String.format(Locale.ROOT,
+                        "%s: residual %.1f nm is %.1f times its expected spread, but without it the other lines "
+                                + "cross too shallow for a fix: kept; check it", lines.get(worst).label(),
+                        sol.residual[worst], Math.abs(sol.normalised[worst])));
+                break;
+            }
             reasons[worst] = String.format(Locale.ROOT,
                     "residual %.1f nm is %.1f times its expected spread (limit %.1f): left out of the fix; "
                             + "check the reading, the time and the body's name",
@@ -222,8 +231,9 @@ public final class FixSolver {
             double dn = qen * rhs[0] + qnn * rhs[1];
             s.covariance = new PositionCovariance(qee, qnn, qen);
             s.iterations = it;
-            if (Math.hypot(de, dn) < options.convergenceNm() || it > options.maxIterations()) {
-                s.converged = Math.hypot(de, dn) < options.convergenceNm();
+            double stepNm = Math.sqrt(de * de + dn * dn);
+            if (stepNm < options.convergenceNm() || it > options.maxIterations()) {
+                s.converged = stepNm < options.convergenceNm();
                 // The residuals above were taken at pos; the last step is below the tolerance.
                 break;
             }

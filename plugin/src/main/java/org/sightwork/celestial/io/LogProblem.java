@@ -11,10 +11,10 @@ package org.sightwork.celestial.io;
  */
 public record LogProblem(String file, int line, int column, String columnName, String message) {
 
-    /** @return e.g. "sights.csv:7: column 4 (hs): '95 12' ... expected ..." */
+    /** @return e.g. "sights.csv:7: column 4 (hs): '95 12' ... expected ...", or "sights.csv:7: message" */
     @Override
     public String toString() {
-        String where = column > 0 ? " column " + column + " (" + columnName + ")" : "";
-        return file + ":" + line + ":" + where + ": " + message;
+        String where = column > 0 ? " column " + column + " (" + columnName + "):" : "";
+        return file + ":" + line + ":" + where + " " + message;
     }
 }

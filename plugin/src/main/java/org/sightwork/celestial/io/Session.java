@@ -48,6 +48,33 @@ public record Session(int formatVersion, String name, List<SessionSight> sights,
     public record SessionSight(String utc, String body, String limb, double hsDeg, double indexErrorArcmin,
             double eyeHeightM, double temperatureC, double pressureHpa, Double drLatDeg, Double drLonDeg,
             double sigmaArcmin, String note) {
+
+        /**
+         * @param s a sight (its UTC with the watch error taken out; course, speed, horizon and
+         *     shore distance are not kept here: the DR log and the settings hold them)
+         * @return the sight as stored
+         */
+        public static SessionSight of(org.sightwork.celestial.sight.Sight s) {
+            return new SessionSight(s.utc().toString(), s.body(), s.limb().name(), s.hsDeg(),
+                    s.indexError().correctionArcmin(), s.eyeHeightM(), s.temperatureC(), s.pressureHpa(),
+                    s.dr().map(p -> p.latDeg()).orElse(null), s.dr().map(p -> p.lonDeg()).orElse(null),
+                    s.sigmaArcmin(), s.note());
+        }
+
+        /**
+         * @return the sight, checked as any sight is
+         * @throws IllegalArgumentException if a value is out of range
+         */
+        public org.sightwork.celestial.sight.Sight toSight() {
+            var b = org.sightwork.celestial.sight.Sight.builder(body, java.time.Instant.parse(utc), hsDeg)
+                    .limb(limb == null ? null : org.sightwork.celestial.sight.Limb.valueOf(limb))
+                    .indexError(new org.sightwork.celestial.sight.IndexError(indexErrorArcmin)).eyeHeightM(eyeHeightM)
+                    .temperatureC(temperatureC).pressureHpa(pressureHpa).sigmaArcmin(sigmaArcmin).note(note);
+            if (drLatDeg != null && drLonDeg != null) {
+                b.dr(org.sightwork.geo.earth.GeoPosition.of(drLatDeg, drLonDeg));
+            }
+            return b.build();
+        }
     }
 
     /**

@@ -267,6 +267,10 @@ public final class SightLogReader {
                     default -> problem("horizon", "'" + hz.get() + "' is not a horizon: expected sea or artificial");
                 }
             }
+            if (!Double.isNaN(hs) && !artificial && (hs < -1.0 || hs > 90.0)) {
+                problem("hs", "sextant altitude " + Angles.formatDm(hs, 2)
+                        + " is outside -1° to 90°: check the reading (degrees and minutes)");
+            }
             Optional<GeoPosition> dr = dr(previous, utc);
             if (bad) {
                 return null;

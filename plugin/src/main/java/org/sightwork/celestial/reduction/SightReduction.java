@@ -9,7 +9,8 @@ import org.sightwork.geo.earth.GeoPosition;
  * Zn = atan2(-cos δ sin LHA, cos φ sin δ - sin φ cos δ cos LHA), the cosine and the four-part
  * formulas of the triangle pole-zenith-body (Smart, <i>Textbook on Spherical Astronomy</i>, 6th
  * ed., ch. II §§ 9-10); Hc by atan2 of sin and the horizontal component, well conditioned near the
- * zenith. LHA = GHA + longitude (east positive).
+ * zenith (its horizontal part by a plain square root: Math.hypot's overflow guard is not needed
+ * for unit vectors and showed in FixBenchmark's stack profile). LHA = GHA + longitude (east positive).
  *
  * <p><b>Accuracy.</b> Round-off (1e-10°); checked against GeographicLib's geodesic on the unit
  * sphere (zenith distance and azimuth from the AP to the geographical position) in
@@ -43,7 +44,7 @@ public final class SightReduction {
         double east = -cd * Math.sin(t);
         double north = cp * sd - sp * cd * ct;
         double up = sp * sd + cp * cd * ct;
-        double hc = Math.toDegrees(Math.atan2(up, Math.hypot(east, north)));
+        double hc = Math.toDegrees(Math.atan2(up, Math.sqrt(east * east + north * north)));
         double zn = Sphere.normalize360(Math.toDegrees(Math.atan2(east, north)));
         return new ComputedAltitude(lha, hc, zn);
     }

@@ -80,7 +80,7 @@ public final class Sphere {
      * @return the end point
      */
     public static GeoPosition step(GeoPosition from, double eastNm, double northNm) {
-        double d = Math.hypot(eastNm, northNm) / NM_PER_RADIAN;
+        double d = Math.sqrt(eastNm * eastNm + northNm * northNm) / NM_PER_RADIAN;
         if (d == 0.0) {
             return from;
         }
@@ -155,7 +155,7 @@ public final class Sphere {
      * @return the position of the vector's direction
      */
     public static GeoPosition fromVector(double x, double y, double z, double lonAtPoleDeg) {
-        double h = Math.hypot(x, y);
+        double h = Math.sqrt(x * x + y * y);
         double lat = Math.toDegrees(Math.atan2(z, h));
         double lon = h < 1e-15 ? lonAtPoleDeg : Math.toDegrees(Math.atan2(y, x));
         return GeoPosition.of(lat, lon);

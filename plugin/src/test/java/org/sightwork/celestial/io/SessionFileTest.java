@@ -60,4 +60,13 @@ class SessionFileTest {
         assertEquals("good", o.session().orElseThrow().name(), "the backup");
         assertEquals("{\"formatVersion\": 1, \"sights\": [ {\"utc\": ", Files.readString(f), "damaged file untouched");
     }
+
+    @Test
+    void sightsRoundTripThroughTheSession() {
+        var sight = org.sightwork.celestial.sight.Sight.builder("Moon", java.time.Instant.parse("2025-03-14T12:00:00Z"),
+                20.5).limb(org.sightwork.celestial.sight.Limb.UPPER)
+                .indexError(org.sightwork.celestial.sight.IndexError.onArc(1.2)).eyeHeightM(3.0)
+                .dr(org.sightwork.geo.earth.GeoPosition.of(-12.0, 170.0)).build();
+        assertEquals(sight, Session.SessionSight.of(sight).toSight(), "same sight back");
+    }
 }
