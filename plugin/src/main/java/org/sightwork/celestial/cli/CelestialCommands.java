@@ -11,6 +11,6 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of();
+        return List.of(new CompareCommand());
     }
 }
