@@ -130,8 +130,8 @@ public final class ComparisonReport {
                 case SUSPECT -> "#c80";
                 case INCONSISTENT -> "#c00";
             };
-            s.append(String.format(Locale.ROOT, "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"5\" fill=\"%s\"><title>session %d: "
-                    + "NIS %.1f, %.2f nm</title></circle>\n", x, y, colour, d.session().index(), d.nis(), d.distanceNm()));
+            s.append(String.format(Locale.ROOT, "<g><title>session %d: NIS %.1f, %.2f nm</title><circle cx=\"%.1f\" "
+                    + "cy=\"%.1f\" r=\"5\" fill=\"%s\"/></g>\n", d.session().index(), d.nis(), d.distanceNm(), x, y, colour));
         }
         return s.append("</svg>\n").toString();
     }
@@ -177,9 +177,9 @@ public final class ComparisonReport {
         poly(s, best, x0, y0, scale, "#080", "best track (sights and DR, smoothed)");
         for (GpsIntegrity.Discrepancy d : r.discrepancies()) {
             double[] p = f.toLocal(d.session().filtered().position());
-            s.append(String.format(Locale.ROOT, "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"4\" fill=\"none\" stroke=\"#000\">"
-                    + "<title>session %d</title></circle>\n", PAD + (p[0] - x0) * scale, H - PAD - (p[1] - y0) * scale,
-                    d.session().index()));
+            s.append(String.format(Locale.ROOT, "<g><title>session %d</title><circle cx=\"%.1f\" cy=\"%.1f\" r=\"4\" "
+                    + "fill=\"none\" stroke=\"#000\"/></g>\n", d.session().index(), PAD + (p[0] - x0) * scale,
+                    H - PAD - (p[1] - y0) * scale));
         }
         s.append("<text x=\"60\" y=\"16\" font-size=\"11\" fill=\"#36c\">GPS</text><text x=\"100\" y=\"16\" "
                 + "font-size=\"11\" fill=\"#999\">DR</text><text x=\"130\" y=\"16\" font-size=\"11\" fill=\"#080\">best "
