@@ -11,6 +11,6 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of(new CompareCommand());
+        return List.of(new AlmanacCommand(), new ReduceCommand(), new FixCommand(), new CompareCommand());
     }
 }
