@@ -117,7 +117,7 @@ public final class CompareCommand implements Callable<Integer> {
         Reconciliation rec = PassageFilter.run(log, obs.value(), noise, Duration.ofMinutes(10));
         GpsIntegrity.Result result = GpsIntegrity.compare(rec, log, track, noise);
         if (format == Format.JSON) {
-            out.println(json(result));
+            out.println(json(result, rec));
         } else {
             text(out, result);
         }
@@ -191,7 +191,7 @@ public final class CompareCommand implements Callable<Integer> {
                 r.finalCurrent().setDeg(), r.finalCurrent().driftKn(), r.finalCurrentSigmaKn());
     }
 
-    private static String json(GpsIntegrity.Result r) throws IOException {
+    private static String json(GpsIntegrity.Result r, Reconciliation rec) throws IOException {
         ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode root = m.createObjectNode();
         root.put("caution", Caution.TEXT.replace('\n', ' '));
@@ -237,6 +237,17 @@ public final class CompareCommand implements Callable<Integer> {
         c.put("setDeg", r.finalCurrent().setDeg());
         c.put("driftKn", r.finalCurrent().driftKn());
         c.put("sigmaKn", r.finalCurrentSigmaKn());
+        ArrayNode best = root.putArray("bestTrack");
+        for (org.sightwork.celestial.passage.TrackEstimate e : rec.smoothed()) {
+            ObjectNode o = best.addObject();
+            o.put("timeUtc", e.time().toString());
+            o.put("latDeg", e.position().latDeg());
+            o.put("lonDeg", e.position().lonDeg());
+            o.put("semiMajorNm", e.positionCovariance().semiMajorNm());
+            o.put("semiMinorNm", e.positionCovariance().semiMinorNm());
+            o.put("currentSetDeg", e.current().setDeg());
+            o.put("currentDriftKn", e.current().driftKn());
+        }
         return m.writeValueAsString(root);
     }
 }
