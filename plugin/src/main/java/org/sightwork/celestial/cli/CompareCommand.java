@@ -41,10 +41,10 @@ import picocli.CommandLine.Spec;
  * A thin layer over {@link PassageFilter} and {@link GpsIntegrity}.
  */
 @Command(name = "compare", mixinStandardHelpOptions = true,
-        description = {"Compares a GPS track with the sights and the dead reckoning: the discrepancy at each",
-            "sight session, a consistency test (chi-square, 95% and 99%), an integrity verdict",
-            "(consistent / suspect / inconsistent) with its evidence, and the current found.",
-            "Method: docs/PASSAGE.md."},
+        description = {"Compares a GPS track with the sights and the dead reckoning.",
+            "At each sight session: the discrepancy, a consistency test (chi-square,",
+            "95%% and 99%%) and an integrity verdict (consistent, suspect, inconsistent)",
+            "with its evidence; and the current found. Method: docs/PASSAGE.md."},
         footer = {"", Caution.TEXT})
 public final class CompareCommand implements Callable<Integer> {
 
@@ -74,7 +74,7 @@ public final class CompareCommand implements Callable<Integer> {
             description = "UTC date of the first fix, for an NMEA log with no RMC or ZDA")
     LocalDate gpsDate;
 
-    @Option(names = "--format", defaultValue = "text", paramLabel = "text|json", description = "output: ${COMPLETION-CANDIDATES}")
+    @Option(names = "--format", defaultValue = "text", paramLabel = "text|json", description = "output: text (default) or json")
     Format format;
 
     @Option(names = "--report", paramLabel = "FILE.html", description = "also write an HTML report with plots")
