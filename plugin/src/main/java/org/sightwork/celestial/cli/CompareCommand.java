@@ -4,10 +4,15 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.time.Duration;
 import java.time.LocalDate;
 import java.util.List;
@@ -18,6 +23,11 @@ import org.sightwork.celestial.passage.CelestialObservation;
 import org.sightwork.celestial.passage.ComparisonReport;
 import org.sightwork.celestial.passage.GpsIntegrity;
 import org.sightwork.celestial.passage.ObservationCsv;
+import org.sightwork.celestial.passage.Observations;
+import org.sightwork.celestial.reduction.ReducedSight;
+import org.sightwork.celestial.sight.Sight;
+import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.track.DrLeg;
 import org.sightwork.celestial.passage.PassageFilter;
 import org.sightwork.celestial.passage.PassageNoise;
 import org.sightwork.celestial.passage.Reconciliation;
@@ -60,11 +70,13 @@ public final class CompareCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Option(names = "--sights", required = true, paramLabel = "FILE",
-            description = "celestial observations: CSV of lines of position and fixes (see docs/PASSAGE.md)")
+            description = {"the sights: a sight log (docs/SIGHT-LOG.md), reduced here, or a CSV of lines of",
+                "position and fixes (docs/PASSAGE.md)"})
     Path sights;
 
     @Option(names = "--dr", paramLabel = "FILE",
-            description = "DR log (CSV of legs); without it, the DR comes from the GPS log's heading and speed through the water")
+            description = {"DR log (CSV of legs); without it, the DR comes from the sight log's DR columns,",
+                "or else from the GPS log's heading and speed through the water"})
     Path dr;
 
     @Option(names = "--gps", required = true, paramLabel = "FILE", description = "GPS track: NMEA 0183 log, GPX or CSV")
@@ -84,11 +96,29 @@ public final class CompareCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        ImportResult<List<CelestialObservation>> obs = ObservationCsv.read(sights);
-        printProblems(err, obs);
+        List<CelestialObservation> observations;
+        Optional<DrLog> sightLogDr = Optional.empty();
+        PassageNoise noise = PassageNoise.DEFAULT;
+        if (isSightLog(sights)) {
+            SightInput in = SightInput.load(sights, Optional.empty(), 0.0);
+            in.reportProblems(err);
+            observations = new ArrayList<>();
+            for (ReducedSight r : in.reduced) {
+                observations.add(Observations.of(r.lop()));
+            }
+            sightLogDr = drFromSightLog(in.reduced);
+        } else {
+            ImportResult<List<CelestialObservation>> obs = ObservationCsv.read(sights);
+            printProblems(err, obs);
+            observations = obs.value();
+        }
         Track track = readGps(err);
         DrLog log;
-        if (dr != null) {
+        if (dr == null && sightLogDr.isPresent()) {
+            log = sightLogDr.get();
+            // The departure is a DR position, not a known point: trust it as such.
+            noise = noise.withDepartureSigmaNm(SIGHT_LOG_DR_SIGMA_NM);
+        } else if (dr != null) {
             ImportResult<Optional<DrLog>> d = DrLog.read(dr);
             printProblems(err, d);
             if (d.value().isEmpty()) {
@@ -105,7 +135,7 @@ public final class CompareCommand implements Callable<Integer> {
             }
             log = fromGps.get();
         }
-        if (obs.value().isEmpty()) {
+        if (observations.isEmpty()) {
             err.println("sightwork compare: " + sights + ": no observation could be read");
             return Main.EXIT_USAGE;
         }
@@ -113,8 +143,7 @@ public final class CompareCommand implements Callable<Integer> {
             err.println("sightwork compare: " + gps + ": no GPS fix could be read");
             return Main.EXIT_USAGE;
         }
-        PassageNoise noise = PassageNoise.DEFAULT;
-        Reconciliation rec = PassageFilter.run(log, obs.value(), noise, Duration.ofMinutes(10));
+        Reconciliation rec = PassageFilter.run(log, observations, noise, Duration.ofMinutes(10));
         GpsIntegrity.Result result = GpsIntegrity.compare(rec, log, track, noise);
         if (format == Format.JSON) {
             out.println(json(result, rec));
@@ -129,6 +158,64 @@ public final class CompareCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** Standard deviation of a DR position taken from a sight log as the departure (nm, common practice). */
+    static final double SIGHT_LOG_DR_SIGMA_NM = 5.0;
+
+    /** A sight log (docs/SIGHT-LOG.md) has the columns utc, body and hs; our observation CSV has kind. */
+    static boolean isSightLog(Path file) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException("sights file " + file + " does not exist or is not a file");
+        }
+        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            String s;
+            while ((s = r.readLine()) != null) {
+                if (s.isBlank() || s.startsWith("#")) {
+                    continue;
+                }
+                List<String> cols = new ArrayList<>();
+                for (String c : s.split(",")) {
+                    cols.add(c.strip().toLowerCase(Locale.ROOT));
+                }
+                return cols.contains("hs") && cols.contains("body") && !cols.contains("kind");
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The DR carried by a sight log: the first DR position is the departure (at its sight's time),
+     * and each sight's course and speed (as steered, through the water) start a leg where they change.
+     */
+    static Optional<DrLog> drFromSightLog(List<ReducedSight> reduced) {
+        List<ReducedSight> sorted = new ArrayList<>(reduced);
+        sorted.sort(Comparator.comparing(r -> r.lop().utc()));
+        GeoPosition dep = null;
+        List<DrLeg> legs = new ArrayList<>();
+        for (ReducedSight r : sorted) {
+            Sight s = r.worksheet().sight();
+            if (dep == null) {
+                if (s.dr().isEmpty() || s.courseDeg().isEmpty() || s.speedKn().isEmpty()) {
+                    continue;
+                }
+                dep = s.dr().get();
+            }
+            if (s.courseDeg().isPresent() && s.speedKn().isPresent()) {
+                double c = s.courseDeg().getAsDouble() % 360;
+                DrLeg leg = new DrLeg(r.lop().utc(), c < 0 ? c + 360 : c, s.speedKn().getAsDouble(), 0);
+                DrLeg last = legs.isEmpty() ? null : legs.get(legs.size() - 1);
+                if (last == null || (leg.start().isAfter(last.start())
+                        && (last.headingDeg() != leg.headingDeg() || last.stwKn() != leg.stwKn()))) {
+                    legs.add(leg);
+                }
+            }
+        }
+        if (dep == null || legs.isEmpty()) {
+            return Optional.empty();
+        }
+        Instant end = sorted.get(sorted.size() - 1).lop().utc().plusSeconds(60);
+        return Optional.of(new DrLog(dep, legs, end));
     }
 
     private Track readGps(PrintWriter err) throws IOException {
