@@ -6,7 +6,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.DateTimeException;
 import java.time.LocalDate;
-import java.time.LocalTime;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.Optional;
@@ -167,7 +166,7 @@ public final class NmeaTrackReader {
             problems.add(0, 0, uN + " fixes before the first date (no RMC or ZDA sentence gives one) were left out:"
                     + " give the log's start date");
         }
-        if (sentences == 0 && problems.result(null).problemCount() == 0 && lineNo > 1) {
+        if (sentences == 0 && problems.count() == 0 && lineNo > 1) {
             problems.add(0, 0, "no NMEA 0183 sentence found");
         }
     }
@@ -709,10 +708,5 @@ public final class NmeaTrackReader {
             return b - 'a' + 10;
         }
         return -1;
-    }
-
-    /** For tests and reports: time of day as text. */
-    static String todText(long ms) {
-        return LocalTime.ofNanoOfDay(ms * 1_000_000L).toString();
     }
 }
