@@ -31,6 +31,10 @@ final class Problems {
         return new ImportResult<>(value, kept, count);
     }
 
+    long count() {
+        return count;
+    }
+
     String file() {
         return file;
     }

@@ -41,6 +41,28 @@ class GpxTrackIoTest {
     }
 
     @Test
+    void theXmlFactoryJpxUsesReadsNoExternalEntity() throws Exception {
+        // JPX 3.2.1 itself stops at a DTD event; the factory must also refuse on its own (defence in depth).
+        assertTrue(io.jenetics.jpx.XMLProvider.provider() instanceof SafeXmlProvider, "our provider is the one in use");
+        Path secret = dir.resolve("secret2.txt");
+        Files.writeString(secret, "SECRET-CONTENT");
+        String xml = "<?xml version=\"1.0\"?>\n<!DOCTYPE a [<!ENTITY x SYSTEM \"" + secret.toUri() + "\">]><a>&x;</a>";
+        javax.xml.stream.XMLStreamReader r = new SafeXmlProvider().xmlInputFactory()
+                .createXMLStreamReader(new java.io.StringReader(xml));
+        StringBuilder text = new StringBuilder();
+        try {
+            while (r.hasNext()) {
+                if (r.next() == javax.xml.stream.XMLStreamConstants.CHARACTERS) {
+                    text.append(r.getText());
+                }
+            }
+        } catch (javax.xml.stream.XMLStreamException refused) {
+            // refusing the undeclared entity is as good as not expanding it
+        }
+        assertFalse(text.toString().contains("SECRET-CONTENT"), "the entity is not expanded");
+    }
+
+    @Test
     void readsTracksAndWaypointsAndWritesThemBack() throws IOException {
         String gpx = "<?xml version=\"1.0\"?>\n<gpx version=\"1.1\" creator=\"t\" xmlns=\"http://www.topografix.com/GPX/1/1\">"
                 + "<wpt lat=\"38.53\" lon=\"-28.63\"><name>Horta</name></wpt>"

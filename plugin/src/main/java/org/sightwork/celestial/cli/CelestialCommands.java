@@ -11,7 +11,7 @@ public final class CelestialCommands implements CommandProvider {
 
     @Override
     public List<Object> commands() {
-        return List.of(new AlmanacCommand(), new ReduceCommand(), new FixCommand(), new PlanCommand(),
-                new IdentifyCommand(), new CompassCommand(), new DrillCommand());
+        return List.of(new AlmanacCommand(), new ReduceCommand(), new FixCommand(), new CompareCommand(),
+                new PlanCommand(), new IdentifyCommand(), new CompassCommand(), new DrillCommand());
     }
 }

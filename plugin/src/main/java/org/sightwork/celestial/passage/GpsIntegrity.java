@@ -42,7 +42,7 @@ import org.sightwork.geo.track.Track;
  * that is not undone within 10 minutes); <b>frozen position</b> (the GPS position does not move by
  * 2 m for 2 minutes or more while the log gives at least 1 kn); <b>slow drift away</b> (at a
  * fixing session beyond the 99 % level, the discrepancy has grown since the fix before while the
- * GPS track shows no jump).
+ * GPS track shows no jump since the session before).
  *
  * <p><b>Accuracy.</b> Measured on 1,000 simulated passages with fixed seeds (tests): a 2 nm offset
  * appearing between sessions is flagged at the first session after it, and a clean GPS is never
@@ -242,7 +242,7 @@ public final class GpsIntegrity {
                     && (de * prevVector[0] + dn * prevVector[1]) > Math.cos(Math.toRadians(45))
                     * Math.hypot(de, dn) * Math.hypot(prevVector[0], prevVector[1]);
             boolean repeated = s.fixOnItsOwn() && level != TestLevel.PASS && prevLevel != TestLevel.PASS && sameWay;
-            final Instant sinceFix = prevFixEnd.isBefore(s.start()) ? prevFixEnd : s.start();
+            final Instant sinceFix = prevEnd.isBefore(s.start()) ? prevEnd : s.start();
             boolean jumpSinceFix = patterns.stream().anyMatch(p -> (p.pattern() == Pattern.STEP_OFFSET
                     || p.pattern() == Pattern.IMPOSSIBLE_SPEED) && !p.to().isBefore(sinceFix)
                     && !p.from().isAfter(s.end()));

@@ -21,6 +21,17 @@ public record PassageNoise(double drVelocityNoiseKn, double currentSigmaKn, doub
     /** Common practice for a yacht on passage (see the class comment). */
     public static final PassageNoise DEFAULT = new PassageNoise(0.25, 0.5, 0.05, 0.03, 2.0, 0.2, 0.01);
 
+    /**
+     * The same model with another departure sigma.
+     *
+     * @param sigmaNm standard deviation of the departure position (nm, &gt; 0)
+     * @return the new model
+     */
+    public PassageNoise withDepartureSigmaNm(double sigmaNm) {
+        return new PassageNoise(drVelocityNoiseKn, currentSigmaKn, currentChangeKnPerSqrtHour, speedScaleSigma,
+                compassBiasSigmaDeg, sigmaNm, gpsSigmaNm);
+    }
+
     /** Checks that every value is a positive number (or zero where zero makes sense). */
     public PassageNoise {
         double[] v = {drVelocityNoiseKn, currentSigmaKn, currentChangeKnPerSqrtHour, speedScaleSigma,
