@@ -8,12 +8,12 @@ committed="$here/../plugin/src/test/resources/reference"
 tmp="$(mktemp -d)"
 trap 'rm -rf "$tmp"' EXIT
 status=0
-for gen in almanac_swetest stars_swetest topocentric_swetest planning_pyephem; do
+for gen in almanac_swetest stars_swetest topocentric_swetest planning_pyephem planning_moving_pyephem; do
   if ! /usr/bin/python3 "$here/$gen.py" "$tmp" > "$tmp/$gen.log" 2>&1; then
     echo "FAIL $gen: generator failed:"; tail -20 "$tmp/$gen.log"; exit 2
   fi
 done
-for t in almanac-swetest.tsv stars-swetest.tsv topocentric-swetest.tsv planning-pyephem.tsv; do
+for t in almanac-swetest.tsv stars-swetest.tsv topocentric-swetest.tsv planning-pyephem.tsv planning-moving-pyephem.tsv; do
   if [ ! -f "$committed/$t" ]; then
     echo "DIFF $t: no committed table"; status=1; continue
   fi
