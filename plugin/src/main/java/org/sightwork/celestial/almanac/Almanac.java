@@ -35,16 +35,30 @@ import org.sightwork.celestial.time.AstroTime;
  * <li>GHA = GAST - RA with GAST from SOFA iauGst06 (ERA of UT1 minus the equation of the origins from
  * the same bias-precession-nutation matrix); SHA = 360° - RA; HP = asin(6378.137 km / distance); SD:
  * Sun 959.63"/R, Moon asin(0.272493 sin HP), planets from their semi-diameters at 1 au (Meeus ch. 55).</li>
+ * <li>Speed: what depends on TT only is interpolated with Chebyshev polynomials fitted to the chain
+ * above at the nodes of fixed spans ({@link #STANDARD_SPANS}): the frame (the three rotation
+ * matrices, the equation of the origins, the Earth's position and velocity; 8 days, degree 10), the
+ * Moon's J2000 vector (8 days, degree 14) and each planet's heliocentric vector (64 days, degree
+ * 14). A span is fitted on first use and cached ({@link SegmentCache}); light time, aberration, GHA
+ * and the rest are computed per call as before. ERA is computed exactly from UT1.</li>
  * </ul>
  *
  * <p><b>Accuracy:</b> measured against in-process references by the tests of this package, and
  * against a JPL-based reference table where present; see {@code docs/ALMANAC.md}. Truncation of the
- * series (thresholds below) was measured against the full series over 1950-2050.
+ * series (thresholds below) was measured against the full series over 1950-2050. The interpolation
+ * adds under 1e-5" (measured, 1000 random instants of 1900-2100 against the direct chain:
+ * Moon 7.4e-6", all others under 5e-7"; {@code AlmanacInterpolationTest} holds it to 1e-4").
+ *
+ * <p><b>Speed</b> (JMH, {@code bench/}, docs/PERFORMANCE.md): a position costs well under a
+ * microsecond once its span is fitted; the first instant in a new span pays for the fit
+ * (about 11 direct evaluations of the frame, 15 of the Moon or a planet: some 0.15 ms for the Sun
+ * alone, 0.6 ms for every body).
  *
  * <p><b>Limits:</b> 1900-2100 (see {@link AstroTime}); geocentric places only (parallax in altitude
  * and the Moon's augmentation belong to the sight corrections).
  *
- * <p><b>Thread safety:</b> immutable and thread-safe; {@link #standard()} loads the data once.
+ * <p><b>Thread safety:</b> thread-safe; {@link #standard()} loads the data once. The only mutable state
+ * is the span caches, lock-free, whose content never changes a result (spans are anchored at J2000).
  */
 public final class Almanac {
 
@@ -84,8 +98,35 @@ public final class Almanac {
     private final StarCatalogue catalogue;
     private final Map<String, Body> names = new LinkedHashMap<>();
     private final List<Body> navigationalBodies;
+    /** Interpolants, or null where the series are evaluated directly. */
+    private final SegmentCache frameCache;
+    private final SegmentCache moonCache;
+    private final SegmentCache[] planetCaches = new SegmentCache[4];
 
-    private Almanac(double[] thresholds) {
+    /**
+     * Chebyshev spans (days) and degrees of the interpolants: the per-instant frame (precession,
+     * nutation, equation of the origins, Earth), the Moon (geocentric, J2000 ecliptic) and the four
+     * planets (heliocentric, ecliptic of date).
+     *
+     * @param frameDays span of the frame interpolant (days)
+     * @param frameDegree its degree
+     * @param moonDays span of the Moon's interpolant (days)
+     * @param moonDegree its degree
+     * @param planetDays span of the planets' interpolants (days)
+     * @param planetDegree their degree
+     */
+    record Spans(double frameDays, int frameDegree, double moonDays, int moonDegree, double planetDays,
+            int planetDegree) {
+    }
+
+    /**
+     * The spans and degrees used. Measured against the direct evaluation of the same series
+     * ({@code AlmanacInterpolationTest}, random instants of 1900-2100, fixed seed): see the bound
+     * written there and in {@code docs/METHOD-ALMANAC.md}.
+     */
+    static final Spans STANDARD_SPANS = new Spans(8.0, 10, 8.0, 14, 64.0, 14);
+
+    private Almanac(double[] thresholds, Spans spans) {
         earth = new Vsop87("earth", thresholds[0], thresholds[0]);
         String[] p = {"venus", "mars", "jupiter", "saturn"};
         for (int i = 0; i < 4; i++) {
@@ -103,6 +144,19 @@ public final class Almanac {
         List<Body> nb = new ArrayList<>(List.of(Body.SUN, Body.MOON, Body.VENUS, Body.MARS, Body.JUPITER, Body.SATURN));
         nb.addAll(catalogue.navigational());
         navigationalBodies = Collections.unmodifiableList(nb);
+        if (spans == null) {
+            frameCache = null;
+            moonCache = null;
+        } else {
+            frameCache = new SegmentCache(spans.frameDays(), spans.frameDegree(), FRAME_CHANNELS, this::frameAt);
+            moonCache = new SegmentCache(spans.moonDays(), spans.moonDegree(), 3,
+                    (d, xyz) -> moon.eclipticJ2000(d / 36525.0, xyz));
+            for (int i = 0; i < 4; i++) {
+                int index = i;
+                planetCaches[i] = new SegmentCache(spans.planetDays(), spans.planetDegree(), 3,
+                        (d, xyz) -> planetAt(index, d, xyz));
+            }
+        }
     }
 
     /**
@@ -116,7 +170,7 @@ public final class Almanac {
             synchronized (Almanac.class) {
                 a = standard;
                 if (a == null) {
-                    a = new Almanac(STANDARD_THRESHOLDS);
+                    a = new Almanac(STANDARD_THRESHOLDS, STANDARD_SPANS);
                     standard = a;
                 }
             }
@@ -125,22 +179,43 @@ public final class Almanac {
     }
 
     /**
-     * An almanac with the full series as shipped (for measuring the truncation).
+     * An almanac with the full series as shipped, evaluated directly at each instant (for measuring
+     * the truncation).
      *
      * @return a new almanac
      */
     static Almanac fullSeries() {
-        return new Almanac(new double[6]);
+        return new Almanac(new double[6], null);
     }
 
     /**
-     * An almanac with chosen truncation thresholds (for measuring the truncation).
+     * An almanac with chosen truncation thresholds, evaluated directly (for measuring the truncation).
      *
      * @param thresholds as {@link #STANDARD_THRESHOLDS}
      * @return a new almanac
      */
     static Almanac truncated(double... thresholds) {
-        return new Almanac(thresholds.clone());
+        return new Almanac(thresholds.clone(), null);
+    }
+
+    /**
+     * The standard series evaluated directly at each instant, without interpolation: the reference
+     * of the interpolation and the function it is fitted to.
+     *
+     * @return a new almanac
+     */
+    static Almanac direct() {
+        return new Almanac(STANDARD_THRESHOLDS, null);
+    }
+
+    /**
+     * The standard series interpolated with other spans (for measuring the interpolation).
+     *
+     * @param spans spans and degrees
+     * @return a new almanac
+     */
+    static Almanac interpolated(Spans spans) {
+        return new Almanac(STANDARD_THRESHOLDS, spans);
     }
 
     /** Terms kept per series, for the method note: earth, venus, mars, jupiter, saturn, moon. */
@@ -231,7 +306,7 @@ public final class Almanac {
 
     /**
      * Precession-nutation, sidereal time and the Earth's position and velocity, computed once for
-     * many bodies at one instant.
+     * many bodies at one instant (interpolated: see the class comment).
      *
      * @param t the instant
      * @return the snapshot (immutable, thread-safe)
@@ -312,19 +387,20 @@ public final class Almanac {
         return prev[b.length()];
     }
 
+    /** To [0°, 360°) with floor: a double % is a library call (fmod), and a star needs three of these. */
     static double normalizeDeg(double deg) {
-        double d = deg % 360.0;
-        if (d < 0) {
-            d += 360.0;
+        double d = deg;
+        if (d < 0.0 || d >= 360.0) {
+            d -= 360.0 * Math.floor(d / 360.0);
         }
-        return d >= 360.0 ? 0.0 : d;
+        return d >= 360.0 || d < 0.0 ? 0.0 : d;
     }
 
-    private static double[] mul(double[][] m, double[] v) {
-        return new double[] {
-            m[0][0] * v[0] + m[0][1] * v[1] + m[0][2] * v[2],
-            m[1][0] * v[0] + m[1][1] * v[1] + m[1][2] * v[2],
-            m[2][0] * v[0] + m[2][1] * v[1] + m[2][2] * v[2]};
+    /** Flat 3x3 matrix (row-major) times a vector, into out at offset 0. */
+    private static void mul(double[] m, int o, double x, double y, double z, double[] out) {
+        out[0] = m[o] * x + m[o + 1] * y + m[o + 2] * z;
+        out[1] = m[o + 3] * x + m[o + 4] * y + m[o + 5] * z;
+        out[2] = m[o + 6] * x + m[o + 7] * y + m[o + 8] * z;
     }
 
     private static double[][] mul(double[][] a, double[][] b) {
@@ -337,6 +413,13 @@ public final class Almanac {
         return c;
     }
 
+    private static double[] mul(double[][] m, double[] v) {
+        return new double[] {
+            m[0][0] * v[0] + m[0][1] * v[1] + m[0][2] * v[2],
+            m[1][0] * v[0] + m[1][1] * v[1] + m[1][2] * v[2],
+            m[2][0] * v[0] + m[2][1] * v[1] + m[2][2] * v[2]};
+    }
+
     private static double[][] transpose(double[][] a) {
         double[][] c = new double[3][3];
         for (int i = 0; i < 3; i++) {
@@ -347,6 +430,14 @@ public final class Almanac {
         return c;
     }
 
+    private static void put(double[][] m, double[] out, int o) {
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                out[o + 3 * i + j] = m[i][j];
+            }
+        }
+    }
+
     /** Ecliptic to equator: rotation about x by -eps (equatorial = R1(-eps) ecliptic). */
     private static double[][] eclipticToEquator(double eps) {
         double c = Math.cos(eps);
@@ -354,70 +445,122 @@ public final class Almanac {
         return new double[][] {{1, 0, 0}, {0, c, -s}, {0, s, c}};
     }
 
-    private static double[] sphericalOf(double[] v) {
-        double r = Math.sqrt(v[0] * v[0] + v[1] * v[1] + v[2] * v[2]);
+    /** Writes RA [0, 2 pi), Dec and length of v into sph. */
+    private static void sphericalOf(double[] v, double[] sph) {
+        double rxy2 = v[0] * v[0] + v[1] * v[1];
         double ra = Math.atan2(v[1], v[0]);
         if (ra < 0) {
             ra += TWO_PI;
         }
-        double dec = Math.atan2(v[2], Math.hypot(v[0], v[1]));
-        return new double[] {ra, dec, r};
+        sph[0] = ra;
+        sph[1] = Math.atan2(v[2], Math.sqrt(rxy2));
+        sph[2] = Math.sqrt(rxy2 + v[2] * v[2]);
+    }
+
+    // Layout of the per-instant frame channels (frameAt): 3x3 matrices row-major, vectors x, y, z.
+    /** GCRS to true equator of date (bias, precession, nutation). */
+    private static final int F_RBPN = 0;
+    /** Ecliptic of date (VSOP87) to true equator of date, FK5 correction included. */
+    private static final int F_ECL_DATE = 9;
+    /** Mean ecliptic and equinox J2000 to true equator of date. */
+    private static final int F_ECL_J2000 = 18;
+    /** Equation of the origins (rad): GAST = ERA - EO. */
+    private static final int F_EO = 27;
+    /** Earth heliocentric, ecliptic of date (au). */
+    private static final int F_EARTH = 28;
+    /** Earth heliocentric velocity, ecliptic of date (au/day). */
+    private static final int F_EARTH_VEL = 31;
+    /** Earth heliocentric in the GCRS (au). */
+    private static final int F_EARTH_GCRS = 34;
+    /** Earth heliocentric velocity in the GCRS (au/day). */
+    private static final int F_EARTH_VEL_GCRS = 37;
+    /** Number of frame channels. */
+    static final int FRAME_CHANNELS = 40;
+
+    /**
+     * The per-instant quantities that depend on TT only, from the series and SOFA directly: the
+     * function the frame interpolant is fitted to.
+     *
+     * @param d TT days from J2000.0
+     * @param f receives {@link #FRAME_CHANNELS} values (layout F_*)
+     */
+    private void frameAt(double d, double[] f) {
+        double tCenturies = d / 36525.0;
+        JSOFA.NutationTerms nut = JSOFA.jauNut00b(AstroTime.JD_J2000, d);
+        JSOFA.PrecessionNutation pn = JSOFA.jauPn06(AstroTime.JD_J2000, d, nut.dpsi, nut.deps);
+        put(pn.rbpn, f, F_RBPN);
+        double[][] toMeanEq = eclipticToEquator(pn.epsa);
+        put(mul(mul(pn.rn, toMeanEq), fk5Correction(tCenturies)), f, F_ECL_DATE);
+        put(mul(mul(pn.rn, pn.rp), eclipticToEquator(EPS0_ARCSEC * ARCSEC)), f, F_ECL_J2000);
+        // iauGst06 is ERA - iauEors(rbpn, iauS06(x, y)); the second term depends on TT only.
+        JSOFA.CelestialIntermediatePole xy = JSOFA.jauBpn2xy(pn.rbpn);
+        f[F_EO] = JSOFA.jauEors(pn.rbpn, JSOFA.jauS06(AstroTime.JD_J2000, d, xy.x, xy.y));
+        double[] e = new double[6];
+        earth.lbrWithRates(d / 365250.0, e);
+        double[] xyz = new double[3];
+        double[] vel = new double[3];
+        toCartesian(e, xyz, vel);
+        System.arraycopy(xyz, 0, f, F_EARTH, 3);
+        System.arraycopy(vel, 0, f, F_EARTH_VEL, 3);
+        double[][] eclToGcrs = mul(transpose(pn.rbp), toMeanEq);
+        System.arraycopy(mul(eclToGcrs, xyz), 0, f, F_EARTH_GCRS, 3);
+        System.arraycopy(mul(eclToGcrs, vel), 0, f, F_EARTH_VEL_GCRS, 3);
+    }
+
+    /** A planet's heliocentric position, ecliptic of date (au), from the series. */
+    private void planetAt(int index, double d, double[] p) {
+        double[] lbr = new double[3];
+        planets[index].lbr(d / 365250.0, lbr);
+        double cb = Math.cos(lbr[1]);
+        p[0] = lbr[2] * cb * Math.cos(lbr[0]);
+        p[1] = lbr[2] * cb * Math.sin(lbr[0]);
+        p[2] = lbr[2] * Math.sin(lbr[1]);
     }
 
     /** The per-instant state. */
     private final class InstantState implements Snapshot {
         private final AstroTime time;
-        private final double tMillennia;
+        private final double days;
         private final double tCenturies;
         private final double gastRad;
-        /** Ecliptic of date (VSOP87) to true equator of date, FK5 correction included. */
-        private final double[][] eclDateToTrue;
-        /** Mean ecliptic and equinox J2000 to true equator of date. */
-        private final double[][] eclJ2000ToTrue;
-        /** GCRS to true equator of date (bias, precession, nutation). */
-        private final double[][] rbpn;
-        /** Earth heliocentric, ecliptic of date (au) and velocity (au/day). */
-        private final double[] earthXyz = new double[3];
-        private final double[] earthVel = new double[3];
+        /** Frame channels (layout F_*). */
+        private final double[] f = new double[FRAME_CHANNELS];
         private final double earthR;
-        /** For stars: Earth position in GCRS (au), unit Sun-to-Earth, velocity in c. */
-        private final double[] pobGcrs;
-        private final double[] sunToEarth;
-        private final double[] vC;
+        /** For stars: unit Sun-to-Earth (GCRS), Earth velocity in units of c. */
+        private final double[] sunToEarth = new double[3];
+        private final double[] vC = new double[3];
         private final double bm1;
         private final double dtYears;
-        private final double[] sunTrueKm; // apparent geocentric Sun (true equator, km)
+        /** Apparent geocentric Sun (true equator, km). */
+        private final double[] sunTrueKm = new double[3];
 
         InstantState(AstroTime t) {
             this.time = t;
-            double d = t.jdTt() - AstroTime.JD_J2000;
-            tCenturies = d / 36525.0;
-            tMillennia = d / 365250.0;
-            dtYears = d / 365.25;
-            JSOFA.NutationTerms nut = JSOFA.jauNut00b(AstroTime.JD_J2000, d);
-            JSOFA.PrecessionNutation pn = JSOFA.jauPn06(AstroTime.JD_J2000, d, nut.dpsi, nut.deps);
-            rbpn = pn.rbpn;
-            gastRad = JSOFA.jauGst06(AstroTime.JD_J2000, t.jdUt1() - AstroTime.JD_J2000, AstroTime.JD_J2000, d, rbpn);
-            double[][] toMeanEq = eclipticToEquator(pn.epsa);
-            eclDateToTrue = mul(mul(pn.rn, toMeanEq), fk5Correction(tCenturies));
-            eclJ2000ToTrue = mul(mul(pn.rn, pn.rp), eclipticToEquator(EPS0_ARCSEC * ARCSEC));
-            double[] e = new double[6];
-            earth.lbrWithRates(tMillennia, e);
-            toCartesian(e, earthXyz, earthVel);
-            earthR = e[2];
-            double[][] eclToGcrs = mul(transpose(pn.rbp), toMeanEq);
-            pobGcrs = mul(eclToGcrs, earthXyz);
-            sunToEarth = new double[] {pobGcrs[0] / earthR, pobGcrs[1] / earthR, pobGcrs[2] / earthR};
-            double[] v = mul(eclToGcrs, earthVel);
-            double k = LIGHT_DAYS_PER_AU; // au/day to units of c
-            vC = new double[] {v[0] * k, v[1] * k, v[2] * k};
+            days = t.jdTt() - AstroTime.JD_J2000;
+            tCenturies = days / 36525.0;
+            dtYears = days / 365.25;
+            if (frameCache != null) {
+                frameCache.evaluate(days, f);
+            } else {
+                frameAt(days, f);
+            }
+            gastRad = JSOFA.jauAnp(JSOFA.jauEra00(AstroTime.JD_J2000, t.jdUt1() - AstroTime.JD_J2000) - f[F_EO]);
+            double ex = f[F_EARTH];
+            double ey = f[F_EARTH + 1];
+            double ez = f[F_EARTH + 2];
+            earthR = Math.sqrt(ex * ex + ey * ey + ez * ez);
+            for (int j = 0; j < 3; j++) {
+                sunToEarth[j] = f[F_EARTH_GCRS + j] / earthR;
+                vC[j] = f[F_EARTH_VEL_GCRS + j] * LIGHT_DAYS_PER_AU; // au/day to units of c
+            }
             bm1 = Math.sqrt(1.0 - (vC[0] * vC[0] + vC[1] * vC[1] + vC[2] * vC[2]));
             // The Sun: the heliocentric origin with light time and aberration (+ v tau).
             double tau = earthR * LIGHT_DAYS_PER_AU;
-            double[] rho = {-earthXyz[0] + earthVel[0] * tau, -earthXyz[1] + earthVel[1] * tau,
-                -earthXyz[2] + earthVel[2] * tau};
-            double[] sv = mul(eclDateToTrue, rho);
-            sunTrueKm = new double[] {sv[0] * AU_KM, sv[1] * AU_KM, sv[2] * AU_KM};
+            mul(f, F_ECL_DATE, -ex + f[F_EARTH_VEL] * tau, -ey + f[F_EARTH_VEL + 1] * tau,
+                    -ez + f[F_EARTH_VEL + 2] * tau, sunTrueKm);
+            for (int j = 0; j < 3; j++) {
+                sunTrueKm[j] *= AU_KM;
+            }
         }
 
         @Override
@@ -451,25 +594,28 @@ public final class Almanac {
         }
 
         private BodyPosition sun() {
-            double[] s = sunTrue();
-            double[] sph = sphericalOf(s);
+            double[] sph = new double[3];
+            sphericalOf(sunTrueKm, sph);
             double distAu = sph[2] / AU_KM;
             return solarSystem(Body.SUN, sph, SUN_SD_1AU_ARCSEC / distAu / 60.0, Magnitudes.sun(distAu),
                     OptionalDouble.empty(), OptionalDouble.empty());
         }
 
-        private double[] sunTrue() {
-            return sunTrueKm;
-        }
-
         private BodyPosition moon() {
             double[] xyz = new double[3];
-            moon.eclipticJ2000(tCenturies - MOON_LIGHT_TIME_S / 86400.0 / 36525.0, xyz);
-            double[] v = mul(eclJ2000ToTrue, xyz);
-            double[] sph = sphericalOf(v);
+            double dm = days - MOON_LIGHT_TIME_S / 86400.0;
+            if (moonCache != null) {
+                moonCache.evaluate(dm, xyz);
+            } else {
+                moon.eclipticJ2000(dm / 36525.0, xyz);
+            }
+            double[] v = new double[3];
+            mul(f, F_ECL_J2000, xyz[0], xyz[1], xyz[2], v);
+            double[] sph = new double[3];
+            sphericalOf(v, sph);
             double hp = Math.asin(EARTH_RADIUS_KM / sph[2]);
             double sd = Math.asin(MOON_K * Math.sin(hp));
-            double[] s = sunTrue();
+            double[] s = sunTrueKm;
             double rs = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
             double cosPsi = (s[0] * v[0] + s[1] * v[1] + s[2] * v[2]) / (rs * sph[2]);
             double psi = Math.acos(Math.max(-1.0, Math.min(1.0, cosPsi)));
@@ -480,6 +626,14 @@ public final class Almanac {
             return new BodyPosition(Body.MOON, time, gha(sph[0]), Math.toDegrees(sph[1]), Math.toDegrees(sph[0]),
                     OptionalDouble.empty(), OptionalDouble.of(sph[2]), OptionalDouble.of(Math.toDegrees(hp) * 60.0),
                     OptionalDouble.of(Math.toDegrees(sd) * 60.0), OptionalDouble.of(mag), OptionalDouble.of(k));
+        }
+
+        private void heliocentric(int index, double d, double[] p) {
+            if (planetCaches[index] != null) {
+                planetCaches[index].evaluate(d, p);
+            } else {
+                planetAt(index, d, p);
+            }
         }
 
         private BodyPosition planet(Body body) {
@@ -501,22 +655,16 @@ public final class Almanac {
             } else {
                 throw new IllegalArgumentException("no theory for planet " + body.name());
             }
-            Vsop87 series = planets[index];
-            double[] lbr = new double[3];
             double[] p = new double[3];
             double[] rho = new double[3];
             double tau = 0;
             double r = 0;
             double delta = 0;
             for (int iter = 0; iter < 2; iter++) {
-                series.lbr(tMillennia - tau / 365250.0, lbr);
-                double cb = Math.cos(lbr[1]);
-                p[0] = lbr[2] * cb * Math.cos(lbr[0]);
-                p[1] = lbr[2] * cb * Math.sin(lbr[0]);
-                p[2] = lbr[2] * Math.sin(lbr[1]);
-                r = lbr[2];
+                heliocentric(index, days - tau, p);
+                r = Math.sqrt(p[0] * p[0] + p[1] * p[1] + p[2] * p[2]);
                 for (int j = 0; j < 3; j++) {
-                    rho[j] = p[j] - earthXyz[j];
+                    rho[j] = p[j] - f[F_EARTH + j];
                 }
                 delta = Math.sqrt(rho[0] * rho[0] + rho[1] * rho[1] + rho[2] * rho[2]);
                 if (iter == 0) {
@@ -524,14 +672,14 @@ public final class Almanac {
                 }
             }
             // The geocentric distance and phase are those of the light-time corrected geometric place.
-            double geoLon = Math.atan2(rho[1], rho[0]);
-            double geoLat = Math.atan2(rho[2], Math.hypot(rho[0], rho[1]));
+            double ringLat = index == 3 ? saturnRingLatitude(Math.atan2(rho[1], rho[0]),
+                    Math.atan2(rho[2], Math.sqrt(rho[0] * rho[0] + rho[1] * rho[1]))) : 0.0;
             tau = delta * LIGHT_DAYS_PER_AU;
-            for (int j = 0; j < 3; j++) {
-                rho[j] += earthVel[j] * tau;
-            }
-            double[] v = mul(eclDateToTrue, rho);
-            double[] sph = sphericalOf(v);
+            double[] v = new double[3];
+            mul(f, F_ECL_DATE, rho[0] + f[F_EARTH_VEL] * tau, rho[1] + f[F_EARTH_VEL + 1] * tau,
+                    rho[2] + f[F_EARTH_VEL + 2] * tau, v);
+            double[] sph = new double[3];
+            sphericalOf(v, sph);
             sph[2] = delta * AU_KM;
             double cosI = (r * r + delta * delta - earthR * earthR) / (2.0 * r * delta);
             double phaseDeg = Math.toDegrees(Math.acos(Math.max(-1.0, Math.min(1.0, cosI))));
@@ -548,7 +696,7 @@ public final class Almanac {
                     mag = Magnitudes.jupiter(r, delta, phaseDeg);
                     break;
                 default:
-                    mag = Magnitudes.saturn(r, delta, phaseDeg, saturnRingLatitude(geoLon, geoLat));
+                    mag = Magnitudes.saturn(r, delta, phaseDeg, ringLat);
                     break;
             }
             return solarSystem(body, sph, sd1au / delta / 60.0, mag, OptionalDouble.of(Normal.sha(sph[0])),
@@ -585,12 +733,14 @@ public final class Almanac {
             double[] p0 = s.p0();
             double[] pm = s.pmPerYear();
             double pxr = s.parallaxArcsec() * ARCSEC;
+            double ox = f[F_EARTH_GCRS];
+            double oy = f[F_EARTH_GCRS + 1];
+            double oz = f[F_EARTH_GCRS + 2];
             // iauPmpx: space motion to date (with the light time across the Earth's orbit) and parallax.
-            double dt = dtYears + (p0[0] * pobGcrs[0] + p0[1] * pobGcrs[1] + p0[2] * pobGcrs[2])
-                    * LIGHT_DAYS_PER_AU / 365.25;
-            double x = p0[0] + dt * pm[0] - pxr * pobGcrs[0];
-            double y = p0[1] + dt * pm[1] - pxr * pobGcrs[1];
-            double z = p0[2] + dt * pm[2] - pxr * pobGcrs[2];
+            double dt = dtYears + (p0[0] * ox + p0[1] * oy + p0[2] * oz) * LIGHT_DAYS_PER_AU / 365.25;
+            double x = p0[0] + dt * pm[0] - pxr * ox;
+            double y = p0[1] + dt * pm[1] - pxr * oy;
+            double z = p0[2] + dt * pm[2] - pxr * oz;
             double n = 1.0 / Math.sqrt(x * x + y * y + z * z);
             x *= n;
             y *= n;
@@ -612,10 +762,10 @@ public final class Almanac {
             double ax = px * bm1 + w1 * vC[0] + w2 * (vC[0] - pdv * px);
             double ay = py * bm1 + w1 * vC[1] + w2 * (vC[1] - pdv * py);
             double az = pz * bm1 + w1 * vC[2] + w2 * (vC[2] - pdv * pz);
-            double[][] m = rbpn;
-            double tx = m[0][0] * ax + m[0][1] * ay + m[0][2] * az;
-            double ty = m[1][0] * ax + m[1][1] * ay + m[1][2] * az;
-            double tz = m[2][0] * ax + m[2][1] * ay + m[2][2] * az;
+            double[] m = f;
+            double tx = m[F_RBPN] * ax + m[F_RBPN + 1] * ay + m[F_RBPN + 2] * az;
+            double ty = m[F_RBPN + 3] * ax + m[F_RBPN + 4] * ay + m[F_RBPN + 5] * az;
+            double tz = m[F_RBPN + 6] * ax + m[F_RBPN + 7] * ay + m[F_RBPN + 8] * az;
             double ra = Math.atan2(ty, tx);
             raDec[0] = ra < 0 ? ra + TWO_PI : ra;
             raDec[1] = Math.atan2(tz, Math.sqrt(tx * tx + ty * ty));

@@ -34,6 +34,8 @@ final class StarCatalogue {
     private final List<Star> stars;
     private final Map<Integer, Star> byHr = new HashMap<>();
     private final List<Body> navigational;
+    /** The same stars indexed by HR number: the per-star lookup without boxing or hashing. */
+    private final Star[] hrIndex;
 
     StarCatalogue() {
         Map<Integer, String[]> nav = new HashMap<>();
@@ -94,6 +96,14 @@ final class StarCatalogue {
             }
         }
         stars = Collections.unmodifiableList(list);
+        int maxHr = 0;
+        for (Star st : list) {
+            maxHr = Math.max(maxHr, st.body().hrNumber());
+        }
+        hrIndex = new Star[maxHr + 1];
+        for (Star st : list) {
+            hrIndex[st.body().hrNumber()] = st;
+        }
         List<Body> navList = new ArrayList<>();
         for (int k = 0; k <= 57; k++) {
             for (Map.Entry<Integer, String[]> e : nav.entrySet()) {
@@ -118,7 +128,7 @@ final class StarCatalogue {
     }
 
     Star byHr(int hr) {
-        return byHr.get(hr);
+        return hr >= 0 && hr < hrIndex.length ? hrIndex[hr] : null;
     }
 
     List<Body> navigational() {

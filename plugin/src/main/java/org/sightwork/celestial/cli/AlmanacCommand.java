@@ -1,7 +1,9 @@
 package org.sightwork.celestial.cli;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SequenceWriter;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import java.io.BufferedWriter;
 import java.io.PrintWriter;
 import java.time.Instant;
 import java.time.LocalDate;
@@ -55,6 +57,18 @@ public final class AlmanacCommand implements Callable<Integer> {
     @Option(names = "--day", paramLabel = "DATE", description = "every hour 00h-23h UTC of this day, e.g. 2026-03-20")
     private String day;
 
+    @Option(names = "--from", paramLabel = "START",
+            description = "a table from this date (00h UTC) or instant, e.g. 2026-01-01 or 2026-01-01T06:00:00Z;"
+                    + " with --days and --step")
+    private String from;
+
+    @Option(names = "--days", paramLabel = "N", description = "with --from: the table covers N days (default 1)")
+    private Integer days;
+
+    @Option(names = "--step", paramLabel = "STEP",
+            description = "with --from: time between rows, a whole number of s, m, h or d, e.g. 10m, 1h (default 1h)")
+    private String step;
+
     @Option(names = "--bodies", paramLabel = "LIST", split = ",",
             description = "bodies by name, case-insensitive (sun, moon, venus, mars, jupiter, saturn, aries,"
                     + " a star name or 'HR n'); 'planets' = the four, 'stars' = the 58 navigational stars;"
@@ -69,32 +83,39 @@ public final class AlmanacCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
+        // The command's writer flushes at every line; a table of 50,000 lines goes through a buffer
+        // (otherwise one write to the terminal or file per line).
+        PrintWriter out = new PrintWriter(new BufferedWriter(spec.commandLine().getOut(), 1 << 16), false);
         Almanac almanac = Almanac.standard();
         List<Body> list = resolveBodies(almanac);
-        List<AstroTime> times = instants();
-        List<BodyPosition> rows = new ArrayList<>();
-        List<Double> ghaAries = new ArrayList<>();
-        for (AstroTime t : times) {
-            Almanac.Snapshot s = almanac.at(t);
-            ghaAries.add(s.ghaAriesDeg());
-            for (Body b : list) {
-                rows.add(s.position(b));
-            }
-        }
+        Instants times = instants(); // every instant checked before anything is written
         switch (format) {
             case CSV:
-                writeCsv(out, rows);
+                writeCsv(out, almanac, times, list);
                 break;
             case JSON:
-                writeJson(out, rows);
+                writeJson(out, almanac, times, list);
                 break;
             default:
-                writeText(out, times, ghaAries, list.size(), rows);
+                writeText(out, almanac, times, list);
                 break;
         }
         out.flush();
         return 0;
+    }
+
+    /**
+     * Evenly spaced instants: first + k step for k in [0, count).
+     *
+     * @param first the first instant (UTC)
+     * @param stepSeconds seconds between instants
+     * @param count number of instants
+     * @param dut1Seconds DUT1 for all
+     */
+    record Instants(Instant first, long stepSeconds, long count, double dut1Seconds) {
+        AstroTime get(long k) {
+            return AstroTime.ofUtc(first.plusSeconds(k * stepSeconds), dut1Seconds);
+        }
     }
 
     private List<Body> resolveBodies(Almanac almanac) {
@@ -123,30 +144,74 @@ public final class AlmanacCommand implements Callable<Integer> {
         return new ArrayList<>(set);
     }
 
-    private List<AstroTime> instants() {
-        if (at != null && day != null) {
-            throw new IllegalArgumentException("give --at or --day, not both");
+    /** Most instants in one table: a year at one-minute steps. */
+    static final long MAX_INSTANTS = 527_040;
+
+    private Instants instants() {
+        int given = (at != null ? 1 : 0) + (day != null ? 1 : 0) + (from != null ? 1 : 0);
+        if (given > 1) {
+            throw new IllegalArgumentException("give one of --at, --day or --from");
         }
-        List<AstroTime> times = new ArrayList<>();
+        if (from == null && (days != null || step != null)) {
+            throw new IllegalArgumentException("--days and --step go with --from, e.g. --from 2026-01-01 --days 365 --step 1h");
+        }
+        Instants times;
         if (day != null) {
-            LocalDate d;
-            try {
-                d = LocalDate.parse(day.strip());
-            } catch (DateTimeParseException e) {
-                throw new IllegalArgumentException("--day '" + day + "' is not a date: expected YYYY-MM-DD such as 2026-03-20");
+            times = new Instants(parseDate(day, "--day").atStartOfDay(ZoneOffset.UTC).toInstant(), 3600, 24, dut1);
+        } else if (from != null) {
+            String f = from.strip();
+            Instant start = f.length() <= 10 ? parseDate(f, "--from").atStartOfDay(ZoneOffset.UTC).toInstant()
+                    : parseInstant(f, "--from");
+            int n = days == null ? 1 : days;
+            if (n < 1 || n > 73_415) {
+                throw new IllegalArgumentException("--days " + n + " is outside 1 to 73415 (the span " + AstroTime.SPAN_TEXT + ")");
             }
-            Instant start = d.atStartOfDay(ZoneOffset.UTC).toInstant();
-            for (int h = 0; h < 24; h++) {
-                times.add(AstroTime.ofUtc(start.plus(h, ChronoUnit.HOURS), dut1));
+            long stepS = parseStep(step == null ? "1h" : step);
+            long count = (n * 86_400L + stepS - 1) / stepS;
+            if (count > MAX_INSTANTS) {
+                throw new IllegalArgumentException("--days " + n + " at --step " + step + " makes " + count
+                        + " instants; at most " + MAX_INSTANTS + " (a year at 1m) in one table");
             }
-            return times;
+            times = new Instants(start, stepS, count, dut1);
+        } else {
+            Instant i = at == null ? Instant.now().truncatedTo(ChronoUnit.SECONDS) : parseInstant(at, "--at");
+            times = new Instants(i, 0, 1, dut1);
         }
-        Instant i = at == null ? Instant.now().truncatedTo(ChronoUnit.SECONDS) : parseInstant(at);
-        times.add(AstroTime.ofUtc(i, dut1));
+        times.get(0); // the span and DUT1 are checked here, before any output
+        times.get(times.count() - 1);
         return times;
     }
 
+    private static LocalDate parseDate(String text, String option) {
+        try {
+            return LocalDate.parse(text.strip());
+        } catch (DateTimeParseException e) {
+            throw new IllegalArgumentException(option + " '" + text + "' is not a date: expected YYYY-MM-DD such as 2026-03-20");
+        }
+    }
+
+    /** "10m", "1h", "30s", "1d" to seconds. */
+    static long parseStep(String text) {
+        String t = text.strip().toLowerCase(Locale.ROOT);
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("([0-9]{1,6})([smhd])").matcher(t);
+        if (!m.matches() || Long.parseLong(m.group(1)) == 0) {
+            throw new IllegalArgumentException("--step '" + text + "' is not a step: expected a whole number above 0 and"
+                    + " s, m, h or d, such as 10m or 1h");
+        }
+        long unit = switch (m.group(2)) {
+            case "s" -> 1L;
+            case "m" -> 60L;
+            case "h" -> 3600L;
+            default -> 86_400L;
+        };
+        return Long.parseLong(m.group(1)) * unit;
+    }
+
     static Instant parseInstant(String text) {
+        return parseInstant(text, "--at");
+    }
+
+    static Instant parseInstant(String text, String option) {
         String t = text.strip();
         try {
             return Instant.parse(t);
@@ -154,23 +219,23 @@ public final class AlmanacCommand implements Callable<Integer> {
             try {
                 return OffsetDateTime.parse(t).toInstant();
             } catch (DateTimeParseException e2) {
-                throw new IllegalArgumentException("--at '" + text + "' is not an instant: expected " + INSTANT_FORM);
+                throw new IllegalArgumentException(option + " '" + text + "' is not an instant: expected " + INSTANT_FORM);
             }
         }
     }
 
-    private static void writeText(PrintWriter out, List<AstroTime> times, List<Double> ghaAries, int perTime,
-            List<BodyPosition> rows) {
+    private static void writeText(PrintWriter out, Almanac almanac, Instants times, List<Body> bodies) {
         AstroTime first = times.get(0);
         out.printf(Locale.ROOT, "Almanac, apparent geocentric places   DUT1 %+.1f s   TT - UT1 %.1f s%n",
                 first.dut1Seconds(), first.deltaTSeconds());
-        for (int k = 0; k < times.size(); k++) {
+        for (long k = 0; k < times.count(); k++) {
             AstroTime t = times.get(k);
+            Almanac.Snapshot s = almanac.at(t);
             out.println();
-            out.printf(Locale.ROOT, "%s   GHA Aries %s%n", t.utc(), Angles.formatDm(ghaAries.get(k), 3));
+            out.printf(Locale.ROOT, "%s   GHA Aries %s%n", t.utc(), Angles.formatDm(s.ghaAriesDeg(), 3));
             out.printf(Locale.ROOT, "%-16s %10s %10s %10s %6s %6s %5s%n", "body", "GHA", "Dec", "SHA", "HP", "SD", "mag");
-            for (int j = 0; j < perTime; j++) {
-                BodyPosition p = rows.get(k * perTime + j);
+            for (Body b : bodies) {
+                BodyPosition p = s.position(b);
                 out.printf(Locale.ROOT, "%-16s %10s %10s %10s %6s %6s %5s%n", p.body().name(),
                         Angles.formatDm(p.ghaDeg(), 3),
                         p.body().equals(Body.ARIES) ? "" : Angles.formatDeclination(p.decDeg()),
@@ -190,12 +255,25 @@ public final class AlmanacCommand implements Callable<Integer> {
         return v.isPresent() ? String.format(Locale.ROOT, "%+.1f", v.getAsDouble()) : "";
     }
 
-    private static void writeCsv(PrintWriter out, List<BodyPosition> rows) {
+    private static void writeCsv(PrintWriter out, Almanac almanac, Instants times, List<Body> bodies) {
         out.println("body,utc,ghaDeg,decDeg,shaDeg,hpArcmin,sdArcmin,mag");
-        for (BodyPosition p : rows) {
-            out.println(String.join(",", csvText(p.body().name()), p.time().utc().toString(),
-                    num(p.ghaDeg(), 6), num(p.decDeg(), 6), opt(p.shaDeg(), 6), opt(p.hpArcmin(), 4),
-                    opt(p.sdArcmin(), 4), opt(p.magnitude(), 2)));
+        StringBuilder line = new StringBuilder(96);
+        for (long k = 0; k < times.count(); k++) {
+            AstroTime t = times.get(k);
+            Almanac.Snapshot s = almanac.at(t);
+            String utc = t.utc().toString();
+            for (Body b : bodies) {
+                BodyPosition p = s.position(b);
+                line.setLength(0);
+                line.append(csvText(b.name())).append(',').append(utc).append(',');
+                Decimals.append(line, p.ghaDeg(), 6).append(',');
+                Decimals.append(line, p.decDeg(), 6).append(',');
+                opt(line, p.shaDeg(), 6).append(',');
+                opt(line, p.hpArcmin(), 4).append(',');
+                opt(line, p.sdArcmin(), 4).append(',');
+                opt(line, p.magnitude(), 2);
+                out.println(line);
+            }
         }
     }
 
@@ -203,32 +281,44 @@ public final class AlmanacCommand implements Callable<Integer> {
         return s.contains(",") || s.contains("\"") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
     }
 
-    private static String num(double v, int decimals) {
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    private static StringBuilder opt(StringBuilder sb, OptionalDouble v, int decimals) {
+        return v.isPresent() ? Decimals.append(sb, v.getAsDouble(), decimals) : sb;
     }
 
-    private static String opt(OptionalDouble v, int decimals) {
-        return v.isPresent() ? num(v.getAsDouble(), decimals) : "";
-    }
-
-    private static void writeJson(PrintWriter out, List<BodyPosition> rows) {
-        List<Map<String, Object>> list = new ArrayList<>();
-        for (BodyPosition p : rows) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("body", p.body().name());
-            m.put("utc", p.time().utc().toString());
-            m.put("ghaDeg", p.ghaDeg());
-            m.put("decDeg", p.decDeg());
-            m.put("shaDeg", boxed(p.shaDeg()));
-            m.put("hpArcmin", boxed(p.hpArcmin()));
-            m.put("sdArcmin", boxed(p.sdArcmin()));
-            m.put("mag", boxed(p.magnitude()));
-            list.add(m);
-        }
-        try {
-            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(list));
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+    private static void writeJson(PrintWriter out, Almanac almanac, Instants times, List<Body> bodies) {
+        try (SequenceWriter w = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                .writerWithDefaultPrettyPrinter().writeValues(new NonClosing(out)).init(true)) {
+            for (long k = 0; k < times.count(); k++) {
+                Almanac.Snapshot s = almanac.at(times.get(k));
+                for (Body b : bodies) {
+                    BodyPosition p = s.position(b);
+                    Map<String, Object> m = new LinkedHashMap<>();
+                    m.put("body", p.body().name());
+                    m.put("utc", p.time().utc().toString());
+                    m.put("ghaDeg", p.ghaDeg());
+                    m.put("decDeg", p.decDeg());
+                    m.put("shaDeg", boxed(p.shaDeg()));
+                    m.put("hpArcmin", boxed(p.hpArcmin()));
+                    m.put("sdArcmin", boxed(p.sdArcmin()));
+                    m.put("mag", boxed(p.magnitude()));
+                    w.write(m);
+                }
+            }
+        } catch (java.io.IOException e) {
             throw new IllegalStateException("cannot write JSON: " + e.getMessage(), e);
+        }
+        out.println();
+    }
+
+    /** The command's writer, left open when the JSON sequence closes. */
+    private static final class NonClosing extends java.io.FilterWriter {
+        NonClosing(java.io.Writer w) {
+            super(w);
+        }
+
+        @Override
+        public void close() {
+            // the caller owns the stream
         }
     }
 
