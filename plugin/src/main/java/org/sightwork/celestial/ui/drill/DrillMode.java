@@ -68,9 +68,10 @@ public final class DrillMode {
      */
     public static DrillMode install(PluginContext ctx, Consumer<Path> openPassage) {
         DrillMode m = new DrillMode(ctx, openPassage);
-        m.overlays.add(ctx.addOverlay("Drill: truth (true track, true positions)", m.painters::paintTruth));
-        m.overlays.add(ctx.addOverlay("Drill: key's fixes", m.painters::paintKeyFixes));
+        // Each new layer goes on top: the truth last, so that nothing hides it once revealed.
         m.overlays.add(ctx.addOverlay("Drill: student's fixes", m.painters::paintStudentFixes));
+        m.overlays.add(ctx.addOverlay("Drill: key's fixes", m.painters::paintKeyFixes));
+        m.overlays.add(ctx.addOverlay("Drill: truth (true track, true positions)", m.painters::paintTruth));
         Runnable repaint = ctx::requestRepaint;
         m.state.revealed().addListener((o, a, b) -> repaint.run());
         m.state.selected().addListener((o, a, b) -> repaint.run());

@@ -27,6 +27,9 @@ final class DrillOverlays {
     /** The banner written on the chart while the truth is hidden. */
     static final String BANNER = "Drill: GPS withheld";
 
+    /** Width of one character of the shell's label font (pixels), to set a label to the left of its mark. */
+    private static final double LABEL_CHAR_PX = 7.4;
+
     private static final DateTimeFormatter HHMM = DateTimeFormatter.ofPattern("HH:mm", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
 
@@ -59,7 +62,7 @@ final class DrillOverlays {
         for (StudentGrade.FixGrade f : g.fixes()) {
             f.student().ifPresent(s -> {
                 p.marker(at(s), MarkerShape.TRIANGLE, DrillStyle.STUDENT_SIZE_PX, DrillStyle.STUDENT_MARK, null);
-                p.label(at(s), g.student() + " " + HHMM.format(f.utc()), DrillStyle.STUDENT, 9, -14);
+                p.label(at(s), g.student() + " " + HHMM.format(f.utc()), DrillStyle.STUDENT, 9, -18);
             });
         }
         for (StudentAnswers.FixAnswer u : g.unmatchedFixes()) {
@@ -75,7 +78,8 @@ final class DrillOverlays {
         }
         for (AnswerKey.FixKey f : state.key().get().orElseThrow().fixes()) {
             p.marker(at(f.fix()), MarkerShape.SQUARE, DrillStyle.KEY_SIZE_PX, DrillStyle.KEY_MARK, null);
-            p.label(at(f.fix()), "key " + HHMM.format(f.utc()), DrillStyle.KEY, 9, 14);
+            String text = "key " + HHMM.format(f.utc());
+            p.label(at(f.fix()), text, DrillStyle.KEY, -(LABEL_CHAR_PX * text.length() + 10), -8);
         }
     }
 
@@ -88,6 +92,21 @@ final class DrillOverlays {
             state.bannerAt().get().ifPresent(b -> p.label(b, BANNER, DrillStyle.BANNER, 12, -26));
             return;
         }
+        // The error lines first, then the track, then the true positions: the truth stays on top.
+        state.selectedGrade().ifPresent(g -> {
+            for (StudentGrade.FixGrade f : g.fixes()) {
+                if (f.student().isPresent() && f.errorFromTruthNm().isPresent()) {
+                    GeoPosition s = at(f.student().get());
+                    GeoPosition tr = at(f.truth());
+                    p.rhumbLine(s, tr, DrillStyle.ERROR_LINE);
+                    Sailings.RhumbLine rl = Sailings.rhumbLine(s, tr);
+                    GeoPosition mid = Sailings.rhumbDestination(s, rl.courseDeg(), rl.distanceNm() / 2);
+                    p.label(mid, String.format(Locale.ROOT, "%.1f nm", f.errorFromTruthNm().getAsDouble()),
+                            DrillStyle.ERROR, 6, -8);
+                    truthFiguresPainted++;
+                }
+            }
+        });
         Track t = state.trueTrack().get().orElseThrow();
         if (t.size() >= 2) {
             List<GeoPosition> pts = new ArrayList<>(t.size());
@@ -101,22 +120,8 @@ final class DrillOverlays {
         for (AnswerKey.FixKey f : state.key().get().orElseThrow().fixes()) {
             p.marker(at(f.truth()), MarkerShape.DOT, DrillStyle.TRUTH_SIZE_PX, null, DrillStyle.TRUTH);
             p.marker(at(f.truth()), MarkerShape.CIRCLE, DrillStyle.TRUTH_SIZE_PX + 6, DrillStyle.TRUTH_MARK, null);
-            p.label(at(f.truth()), "true " + HHMM.format(f.utc()), DrillStyle.TRUTH, -64, 4);
+            p.label(at(f.truth()), "true " + HHMM.format(f.utc()), DrillStyle.TRUTH, 12, 4);
             truthFiguresPainted++;
         }
-        state.selectedGrade().ifPresent(g -> {
-            for (StudentGrade.FixGrade f : g.fixes()) {
-                if (f.student().isPresent() && f.errorFromTruthNm().isPresent()) {
-                    GeoPosition s = at(f.student().get());
-                    GeoPosition tr = at(f.truth());
-                    p.rhumbLine(s, tr, DrillStyle.ERROR_LINE);
-                    Sailings.RhumbLine rl = Sailings.rhumbLine(s, tr);
-                    GeoPosition mid = Sailings.rhumbDestination(s, rl.courseDeg(), rl.distanceNm() / 2);
-                    p.label(mid, String.format(Locale.ROOT, "%.1f nm", f.errorFromTruthNm().getAsDouble()),
-                            DrillStyle.ERROR, 6, 0);
-                    truthFiguresPainted++;
-                }
-            }
-        });
     }
 }
