@@ -40,6 +40,7 @@ import org.sightwork.geo.track.Track;
  * <li><b>Reveal truth…</b> (after a confirmation: the class cannot unsee it) draws the true track,
  * the key's fixes and the line from each student fix to the truth with its error in nm, and lists
  * the grade; <b>Hide truth</b> hides them again.</li>
+ * <li><b>Close drill</b> leaves the mode (the passage stays open).</li>
  * </ul>
  *
  * <p><b>Thread:</b> JavaFX application thread; files are read and graded in the plugin's
@@ -87,6 +88,7 @@ public final class DrillMode {
             ctx.addCommand("Drill", "Load student answers…", m::answersDialog);
             ctx.addCommand("Drill", "Reveal truth…", m::confirmAndReveal);
             ctx.addCommand("Drill", "Hide truth", m::hide);
+            ctx.addCommand("Drill", "Close drill", m::close);
         }
         return m;
     }
@@ -222,6 +224,14 @@ public final class DrillMode {
     /** Hides the truth again. */
     public void hide() {
         state.revealed().set(false);
+    }
+
+    /** Leaves the drill mode: the drill layers are emptied (the passage stays open in the plugin). */
+    public void close() {
+        if (state.isOpen()) {
+            state.clear();
+            ctx.notify(Severity.INFO, "Drill closed; the drill's passage stays open as a passage.");
+        }
     }
 
     private void revealOrHide() {

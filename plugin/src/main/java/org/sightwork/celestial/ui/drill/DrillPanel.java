@@ -9,9 +9,9 @@ import javafx.geometry.Insets;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListView;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
+import javafx.scene.control.TextArea;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
@@ -41,7 +41,8 @@ public final class DrillPanel extends VBox {
     private final Label score = new Label();
     private final ChoiceBox<String> student = new ChoiceBox<>();
     private final TableView<DrillRow> table = new TableView<>();
-    private final ListView<String> comments = new ListView<>();
+    private final TextArea comments = new TextArea();
+    private List<String> commentLines = List.of();
     private final Button reveal = new Button();
     private boolean updating;
 
@@ -71,16 +72,18 @@ public final class DrillPanel extends VBox {
             }
         });
         HBox who = new HBox(6, new Label("Student:"), student, score);
-        table.getColumns().add(column("Fix", DrillRow::fixText, 150));
-        table.getColumns().add(column("Student", DrillRow::studentText, 170));
-        table.getColumns().add(column("Key fix", DrillRow::keyText, 170));
-        table.getColumns().add(column("Truth", DrillRow::truthText, 170));
+        table.getColumns().add(column("Fix", DrillRow::fixText, 190));
+        table.getColumns().add(column("Student", DrillRow::studentText, 160));
+        table.getColumns().add(column("Key fix", DrillRow::keyText, 160));
+        table.getColumns().add(column("Truth", DrillRow::truthText, 160));
         table.getColumns().add(column("From key (nm)", DrillRow::errorFromKeyText, 90));
         table.getColumns().add(column("From truth (nm)", DrillRow::errorFromTruthText, 100));
         table.getColumns().add(column("Points", DrillRow::pointsText, 60));
         table.getColumns().add(column("Mistakes", DrillRow::mistakesText, 260));
         table.setPrefHeight(150);
         comments.setPrefHeight(120);
+        comments.setEditable(false);
+        comments.setWrapText(true);
         VBox.setVgrow(comments, Priority.ALWAYS);
         getChildren().addAll(banner, filesText, buttons, who, table, new Label("The grader's comments:"), comments);
         state.files().addListener((o, a, b) -> refresh());
@@ -107,7 +110,7 @@ public final class DrillPanel extends VBox {
 
     /** @return the comments as shown (for tests) */
     public List<String> comments() {
-        return List.copyOf(comments.getItems());
+        return commentLines;
     }
 
     /** @return the banner's text */
@@ -118,6 +121,11 @@ public final class DrillPanel extends VBox {
     /** @return the score line as shown */
     public String scoreText() {
         return score.getText();
+    }
+
+    private void showComments(List<String> lines) {
+        commentLines = List.copyOf(lines);
+        comments.setText(lines.isEmpty() ? "" : "• " + String.join("\n• ", lines));
     }
 
     private void refresh() {
@@ -149,13 +157,13 @@ public final class DrillPanel extends VBox {
             StudentGrade g = state.selectedGrade().orElse(null);
             if (g == null) {
                 table.getItems().clear();
-                comments.getItems().clear();
+                showComments(List.of());
                 score.setText("");
                 table.setPlaceholder(new Label(open && state.key().get().isPresent()
                         ? "Load a student's answers (Drill ▸ Load student answers…)" : ""));
             } else if (!shown) {
                 table.getItems().clear();
-                comments.getItems().clear();
+                showComments(List.of());
                 score.setText(String.format(Locale.ROOT, "%d fix(es) handed in", g.fixes().stream()
                         .filter(f -> f.student().isPresent()).count()));
                 table.setPlaceholder(new Label("Graded; reveal the truth to see the grade (Drill ▸ Reveal truth…)"));
@@ -163,7 +171,7 @@ public final class DrillPanel extends VBox {
                 table.getItems().setAll(DrillRow.of(g));
                 List<String> all = new ArrayList<>(g.comments());
                 g.problems().forEach(p -> all.add("Not read: " + p));
-                comments.getItems().setAll(all);
+                showComments(all);
                 score.setText(String.format(Locale.ROOT, "score %.1f / 100%s", g.score(),
                         g.fixesOnly() ? " (fixes only)" : ""));
             }

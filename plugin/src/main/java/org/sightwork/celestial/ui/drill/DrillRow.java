@@ -32,7 +32,7 @@ public record DrillRow(String session, Instant utc, Optional<AnswerKey.Position>
         AnswerKey.Position truth, OptionalDouble errorFromKeyNm, OptionalDouble errorFromTruthNm, double points,
         List<Mistake> mistakes) {
 
-    private static final DateTimeFormatter HHMM = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+    private static final DateTimeFormatter HHMM = DateTimeFormatter.ofPattern("HH:mm", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
 
     /** Copies the list. */
@@ -51,9 +51,9 @@ public record DrillRow(String session, Instant utc, Optional<AnswerKey.Position>
                 f.errorFromKeyNm(), f.errorFromTruthNm(), f.points(), f.mistakes())).toList();
     }
 
-    /** @return e.g. "2026-06-22 05:34 morning stars" */
+    /** @return the session and the fix's time (UTC), e.g. "2026-06-22 morning stars, 05:34" */
     public String fixText() {
-        return HHMM.format(utc) + " " + session;
+        return session + ", " + HHMM.format(utc);
     }
 
     /** @return the student's fix, or "not handed in" */
