@@ -120,6 +120,7 @@ public final class CelestialPlugin implements ChartPlugin {
             autosave.play();
         }
 
+        org.sightwork.celestial.ui.drill.DrillMode.install(ctx, f -> openInBackground(Optional.of(f)));
         Optional<Path> wanted = Optional.ofNullable(System.getProperty("sightwork.passage")).map(Path::of);
         ctx.runInBackground("Loading the almanac and the passage", progress -> {
             SightReducer reducer = SightReducer.standard();
