@@ -150,4 +150,16 @@ class DrillPackTest {
         assertEquals(AnswerKeyIo.toJson(p.key()), AnswerKeyIo.toJson(k), "the key reads back as written");
         assertEquals(Instant.parse("2026-06-21T08:00:00Z"), p.track().startUtc(), "demo departure");
     }
+
+    /** Regression: the pack came out 0600 (a temporary file's permissions), unreadable to the class. */
+    @Test
+    void theStudentPackIsReadableByOthers(@TempDir java.nio.file.Path dir) throws Exception {
+        org.junit.jupiter.api.Assumptions.assumeTrue(java.nio.file.Files.getFileAttributeView(dir,
+                java.nio.file.attribute.PosixFileAttributeView.class) != null, "POSIX permissions");
+        DrillPack p = DrillGenerator.generate(Scenarios.demo(), 7, ALMANAC);
+        for (java.nio.file.Path f : DrillPackWriter.write(p, dir, false)) {
+            assertTrue(java.nio.file.Files.getPosixFilePermissions(f)
+                    .contains(java.nio.file.attribute.PosixFilePermission.OTHERS_READ), f + " readable by others");
+        }
+    }
 }
