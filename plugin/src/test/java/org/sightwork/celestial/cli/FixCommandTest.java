@@ -188,4 +188,75 @@ class FixCommandTest {
                 Instant.parse(fix.get("utc").asText())).toSeconds() / 3600.0);
         assertEquals(0.0, Sphere.distanceNm(truthAtFix, p), 0.02, r.out());
     }
+
+    @Test
+    void morningNoonAndAfternoonSunGiveTwoRunningFixes() throws Exception {
+        // Exact Sun sights (no error) from a chosen track, 250° at 6.5 kn, about 3 h apart, the
+        // log's DR 3 nm off: each lone line is advanced along the DR to the next (common practice,
+        // "Sun-run-Sun"), the noon line serving in both running fixes. The log's DR runs on the
+        // track's own course and speed, so each running fix comes back to the truth within the
+        // loop's stopping rule (0.01 nm).
+        GeoPosition start = GeoPosition.of(38.5, -35.0);
+        Instant t0 = Instant.parse("2025-03-14T09:00:00Z");
+        List<ExampleLog.Planned> plan = List.of(new ExampleLog.Planned("Sun", "LOWER", Instant.parse("2025-03-14T11:10:00Z")),
+                new ExampleLog.Planned("Sun", "LOWER", Instant.parse("2025-03-14T14:20:00Z")),
+                new ExampleLog.Planned("Sun", "LOWER", Instant.parse("2025-03-14T17:20:00Z")));
+        Path log = dir.resolve("suns.csv");
+        Files.writeString(log, ExampleLog.csv(start, t0, 250.0, 6.5, 3.0, plan, 0.0, 1L));
+        Run r = run("fix", log.toString(), "--format", "json");
+        assertEquals(0, r.code(), r.err());
+        assertEquals("", r.err(), "nothing to complain about");
+        JsonNode fixes = new ObjectMapper().readTree(r.out()).get("fixes");
+        assertEquals(2, fixes.size(), r.out());
+        for (int i = 0; i < 2; i++) {
+            JsonNode f = fixes.get(i);
+            Instant at = Instant.parse(f.get("utc").asText());
+            assertEquals(plan.get(i + 1).utc(), at, "running fix at the later sight");
+            assertTrue(f.get("running").asBoolean(), "marked as a running fix");
+            GeoPosition truth = Sphere.rhumb(start, 250.0, 6.5 * java.time.Duration.between(t0, at).toSeconds() / 3600.0);
+            GeoPosition p = GeoPosition.of(f.get("latDeg").asDouble(), f.get("lonDeg").asDouble());
+            assertEquals(0.0, Sphere.distanceNm(truth, p), 0.01, "running fix " + i + "\n" + r.out());
+        }
+    }
+
+    @Test
+    void aLoneLineIsReportedOnceOnStandardErrorNamingTheRunningFixOption() throws Exception {
+        // The invented example's two Sun lines are 3.3 h apart: with --advance-max-h 2 neither is
+        // advanced, and each is reported once, on standard error only.
+        Path example = Path.of("..", "docs", "examples", "petrel-sights.csv");
+        Run r = run("fix", example.toString(), "--advance-max-h", "2");
+        assertEquals(2, r.code(), "a fix, and lines that gave none: exit 2");
+        String[] lines = r.err().strip().split("\n");
+        assertEquals(2, lines.length, r.err());
+        for (String l : lines) {
+            assertTrue(l.contains("one line of position") && l.contains("--running-fix-at TIME"), l);
+        }
+        assertFalse(r.out().contains("one line of position"), "not repeated on standard output: " + r.out());
+        assertTrue(r.out().startsWith("Fix 2025-03-14T09:10:15Z"), r.out());
+    }
+
+    @Test
+    void perSightCsvListsEverySightsResidual() throws Exception {
+        // The same fixes as the JSON output, one CSV row per sight: same residuals to the CSV's 0.001 nm.
+        Path example = Path.of("..", "docs", "examples", "petrel-sights.csv");
+        Run csv = run("fix", example.toString(), "--format", "csv", "--per-sight");
+        Run json = run("fix", example.toString(), "--format", "json");
+        assertEquals(0, csv.code(), csv.err());
+        String[] rows = csv.out().strip().split("\n");
+        assertEquals(FixCommand.PER_SIGHT_HEADER, rows[0], "header");
+        List<Double> residuals = new java.util.ArrayList<>();
+        for (JsonNode f : new ObjectMapper().readTree(json.out()).get("fixes")) {
+            for (JsonNode s : f.get("sights")) {
+                residuals.add(s.get("residualNm").asDouble());
+            }
+        }
+        assertEquals(residuals.size(), rows.length - 1, "one row per sight of every fix");
+        for (int i = 1; i < rows.length; i++) {
+            String[] c = rows[i].split(",");
+            assertEquals(residuals.get(i - 1), Double.parseDouble(c[8]), 0.0005, "residual, row " + i);
+        }
+        Run wrong = run("fix", example.toString(), "--per-sight");
+        assertEquals(2, wrong.code(), "--per-sight without csv is a usage error");
+        assertTrue(wrong.err().contains("--per-sight goes with --format csv"), wrong.err());
+    }
 }
