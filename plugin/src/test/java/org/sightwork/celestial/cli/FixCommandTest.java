@@ -3,11 +3,10 @@ package org.sightwork.celestial.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.sightwork.geo.testing.CliRun.run;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -15,8 +14,8 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.sightwork.celestial.reduction.Sphere;
-import org.sightwork.geo.app.Main;
 import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.testing.CliRun;
 
 /**
  * End to end through the command line: sight logs made from a chosen true track (corrections in
@@ -26,16 +25,6 @@ class FixCommandTest {
 
     @TempDir
     Path dir;
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void exactSightsFixBackToTheTruthAtHighLatitudeAndTheDateLine() throws Exception {
@@ -54,7 +43,7 @@ class FixCommandTest {
                     .filter(p -> visible(p, truth)).toList(), 0.0, 1L);
             Path log = dir.resolve("exact.csv");
             Files.writeString(log, csv);
-            Run r = run("fix", log.toString(), "--format", "json", "--window-min", "10");
+            CliRun r = run("fix", log.toString(), "--format", "json", "--window-min", "10");
             JsonNode fix = new ObjectMapper().readTree(r.out()).get("fixes").get(0);
             GeoPosition p = GeoPosition.of(fix.get("latDeg").asDouble(), fix.get("lonDeg").asDouble());
             assertEquals(0.0, Sphere.distanceNm(truth, p), 0.01, "fix at " + truth + "\n" + r.out() + r.err());
@@ -79,7 +68,7 @@ class FixCommandTest {
                 "2025-03-14T09:07:00Z,Siriuss,30,,2.5,38 30N,35W",
                 "2025-03-14T12:00:00Z,Sirius,30,,2.5,38 30N,35W",
                 "2025-03-14T09:08:00Z,Arcturus,34 50.8,,2.5,38 30N,35W", ""));
-        Run r = run("reduce", log.toString());
+        CliRun r = run("reduce", log.toString());
         assertTrue(r.err().contains("bad.csv:2: column 3 (hs):"), r.err());
         assertTrue(r.err().contains("outside -1° to 90°"), "Hs above 90°: " + r.err());
         assertTrue(r.err().contains("bad.csv:3:") && r.err().contains("larger than 10′"), "index error: " + r.err());
@@ -98,7 +87,7 @@ class FixCommandTest {
                 "utc,body,hs,eye_height_m,dr_lat,dr_lon",
                 "2025-03-14T12:40:00Z,Sun,41 45.0,2.5,38 25N,35 28W",
                 "2025-03-14T15:55:00Z,Sun,45 03.9,2.5,38 18N,35 54W", ""));
-        Run r = run("fix", log.toString(), "--running-fix-at", "2025-03-14T15:55:00Z");
+        CliRun r = run("fix", log.toString(), "--running-fix-at", "2025-03-14T15:55:00Z");
         assertTrue(r.err().contains("course and speed"), r.err());
         assertEquals(1, r.code(), "no fix: exit 1");
         assertFalse(r.err().contains("Exception"), r.err());
@@ -112,14 +101,14 @@ class FixCommandTest {
                 "utc,body,hs,eye_height_m,dr_lat,dr_lon",
                 "2025-03-14T12:40:00Z,Sun,41 45.0,2.5,38 25N,35 28W",
                 "2025-03-14T12:40:30Z,Sun,41 46.0,2.5,38 25N,35 28W", ""));
-        Run r = run("fix", log.toString());
+        CliRun r = run("fix", log.toString());
         assertTrue(r.err().contains("too shallow"), r.err());
     }
 
     @Test
     void theExampleLogReadsCleanly() throws Exception {
         Path example = Path.of("..", "docs", "examples", "petrel-sights.csv");
-        Run r = run("fix", example.toString(), "--format", "json", "--running-fix-at", "2025-03-14T15:55:00Z");
+        CliRun r = run("fix", example.toString(), "--format", "json", "--running-fix-at", "2025-03-14T15:55:00Z");
         assertEquals(0, r.code(), r.err());
         JsonNode fix = new ObjectMapper().readTree(r.out()).get("fixes").get(0);
         // The invented true track: 38°30'N 35°W at 09:00Z, 250° at 6.5 kn (see the file's header);
@@ -147,7 +136,7 @@ class FixCommandTest {
                 new ExampleLog.Planned("Sun", "LOWER", noon));
         Path log = dir.resolve("lat.csv");
         Files.writeString(log, ExampleLog.csv(truth, noon, 0.0, 0.0, 0.0, plan, 0.0, 1L));
-        Run r = run("reduce", log.toString(), "--format", "json", "--noon");
+        CliRun r = run("reduce", log.toString(), "--format", "json", "--noon");
         JsonNode root = new ObjectMapper().readTree(r.out());
         String lat = org.sightwork.geo.earth.Angles.formatLatitude(truth.latDeg());
         assertEquals("latitude by Polaris " + lat, root.get("sights").get(0).get("latitude").asText(), r.out());
@@ -178,7 +167,7 @@ class FixCommandTest {
         rows[3] = String.join(",", cells);
         Path log = dir.resolve("shots.csv");
         Files.writeString(log, String.join("\n", rows) + "\n");
-        Run r = run("fix", log.toString(), "--format", "json", "--average-min", "5");
+        CliRun r = run("fix", log.toString(), "--format", "json", "--average-min", "5");
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertTrue(root.get("averaged").get(0).asText().contains("left out"), r.out());
         JsonNode fix = root.get("fixes").get(0);
@@ -203,7 +192,7 @@ class FixCommandTest {
                 new ExampleLog.Planned("Sun", "LOWER", Instant.parse("2025-03-14T17:20:00Z")));
         Path log = dir.resolve("suns.csv");
         Files.writeString(log, ExampleLog.csv(start, t0, 250.0, 6.5, 3.0, plan, 0.0, 1L));
-        Run r = run("fix", log.toString(), "--format", "json");
+        CliRun r = run("fix", log.toString(), "--format", "json");
         assertEquals(0, r.code(), r.err());
         assertEquals("", r.err(), "nothing to complain about");
         JsonNode fixes = new ObjectMapper().readTree(r.out()).get("fixes");
@@ -224,7 +213,7 @@ class FixCommandTest {
         // The invented example's two Sun lines are 3.3 h apart: with --advance-max-h 2 neither is
         // advanced, and each is reported once, on standard error only.
         Path example = Path.of("..", "docs", "examples", "petrel-sights.csv");
-        Run r = run("fix", example.toString(), "--advance-max-h", "2");
+        CliRun r = run("fix", example.toString(), "--advance-max-h", "2");
         assertEquals(2, r.code(), "a fix, and lines that gave none: exit 2");
         String[] lines = r.err().strip().split("\n");
         assertEquals(2, lines.length, r.err());
@@ -239,8 +228,8 @@ class FixCommandTest {
     void perSightCsvListsEverySightsResidual() throws Exception {
         // The same fixes as the JSON output, one CSV row per sight: same residuals to the CSV's 0.001 nm.
         Path example = Path.of("..", "docs", "examples", "petrel-sights.csv");
-        Run csv = run("fix", example.toString(), "--format", "csv", "--per-sight");
-        Run json = run("fix", example.toString(), "--format", "json");
+        CliRun csv = run("fix", example.toString(), "--format", "csv", "--per-sight");
+        CliRun json = run("fix", example.toString(), "--format", "json");
         assertEquals(0, csv.code(), csv.err());
         String[] rows = csv.out().strip().split("\n");
         assertEquals(FixCommand.PER_SIGHT_HEADER, rows[0], "header");
@@ -255,7 +244,7 @@ class FixCommandTest {
             String[] c = rows[i].split(",");
             assertEquals(residuals.get(i - 1), Double.parseDouble(c[8]), 0.0005, "residual, row " + i);
         }
-        Run wrong = run("fix", example.toString(), "--per-sight");
+        CliRun wrong = run("fix", example.toString(), "--per-sight");
         assertEquals(2, wrong.code(), "--per-sight without csv is a usage error");
         assertTrue(wrong.err().contains("--per-sight goes with --format csv"), wrong.err());
     }
