@@ -5,7 +5,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -15,6 +14,7 @@ import org.locationtech.jts.geom.Envelope;
 import org.sightwork.geo.chart.ChartProblem;
 import org.sightwork.geo.chart.ChartSet;
 import org.sightwork.geo.earth.Angles;
+import org.sightwork.geo.files.SafeWrite;
 import org.sightwork.geo.render.Palette;
 import org.sightwork.geo.render.Viewport;
 import org.sightwork.geo.spi.Lighting;
@@ -101,24 +101,20 @@ public final class ChartCommand implements Callable<Integer> {
     }
 
     /**
-     * Writes a PNG through a temporary file in the same directory, then a rename.
+     * Writes a PNG through {@link SafeWrite} (a temporary file in the same directory, then a rename),
+     * making the directory if missing.
      *
      * @param img the image
      * @param file the PNG
      * @throws IOException if it cannot be written
      */
     static void writeAtomically(BufferedImage img, Path file) throws IOException {
-        Path dir = file.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, ".sightwork-", ".png.tmp");
-        try {
-            if (!ImageIO.write(img, "png", tmp.toFile())) {
+        Files.createDirectories(file.toAbsolutePath().getParent());
+        SafeWrite.write(file, out -> {
+            if (!ImageIO.write(img, "png", out)) {
                 throw new IOException("no PNG writer available");
             }
-            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        });
     }
 
     static int[] parseSize(String s) {

@@ -4,16 +4,15 @@ import java.io.IOException;
 import java.io.StringReader;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Properties;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * The user's Sightwork directory ({@code ~/.sightwork}, or {@code -Dsightwork.user.dir}) and the
- * shell's small settings file in it. Written atomically: a temporary file in the same directory,
- * then a rename over the old one, so a crash never leaves half a file.
+ * shell's small settings file in it. Written through {@link SafeWrite} (a temporary file in the
+ * same directory, then a rename over the old one), so a crash never leaves half a file.
  *
  * <p><b>Thread safety:</b> synchronised; quick (a few hundred bytes), so it may run on the FX thread.
  */
@@ -88,16 +87,7 @@ public final class UserFiles {
         p.setProperty(key, value);
         StringWriter w = new StringWriter();
         p.store(w, "Sightwork chart shell settings");
-        Path tmp = Files.createTempFile(dir, SETTINGS, ".tmp");
-        try {
-            Files.writeString(tmp, w.toString(), StandardCharsets.UTF_8);
-            try {
-                Files.move(tmp, f, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, f, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        byte[] bytes = w.toString().getBytes(StandardCharsets.UTF_8);
+        SafeWrite.write(f, out -> out.write(bytes));
     }
 }

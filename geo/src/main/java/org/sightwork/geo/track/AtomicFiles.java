@@ -2,12 +2,16 @@ package org.sightwork.geo.track;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
+import org.sightwork.geo.files.SafeWrite;
 
-/** Writes a file through a temporary file in the same folder and a rename, so a failed write leaves the old file. */
+/**
+ * Writes a file through a temporary file in the same folder and a rename, so a failed write leaves
+ * the old file: a forwarder to {@link SafeWrite}, which holds the contract.
+ *
+ * @deprecated call {@link SafeWrite#write(java.nio.file.Path, SafeWrite.Content)}; kept only until
+ *             the remaining callers have moved over.
+ */
+@Deprecated
 public final class AtomicFiles {
 
     /** What writes the content. */
@@ -26,27 +30,13 @@ public final class AtomicFiles {
     }
 
     /**
-     * Writes a file atomically.
+     * Writes a file atomically (see {@link SafeWrite}).
      *
      * @param target the file to write
      * @param content what to write
      * @throws IOException if it cannot be written; the target is then as it was
      */
-    public static void write(Path target, Content content) throws IOException {
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
-        try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
-                content.writeTo(out);
-            }
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+    public static void write(java.nio.file.Path target, Content content) throws IOException {
+        SafeWrite.write(target, content::writeTo);
     }
 }

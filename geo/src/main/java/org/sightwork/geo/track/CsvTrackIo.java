@@ -14,6 +14,7 @@ import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * Our plain CSV track. The first line names the columns; the order is free, unknown columns are
@@ -110,7 +111,7 @@ public final class CsvTrackIo {
      * @throws IOException if it cannot be written (the old file is then kept)
      */
     public static void write(Path file, Track track) throws IOException {
-        AtomicFiles.write(file, out -> {
+        SafeWrite.write(file, out -> {
             BufferedWriter w = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8));
             w.write(HEADER);
             w.newLine();

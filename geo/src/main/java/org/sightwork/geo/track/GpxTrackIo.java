@@ -13,6 +13,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * GPX 1.1 tracks and waypoints, read and written with JPX ({@code io.jenetics:jpx}). Document type
@@ -139,7 +140,7 @@ public final class GpxTrackIo {
             }
         }));
         GPX gpx = gb.build();
-        AtomicFiles.write(file, out -> GPX.Writer.of(GPX.Writer.Indent.NULL, 9).write(gpx, out));
+        SafeWrite.write(file, out -> GPX.Writer.of(GPX.Writer.Indent.NULL, 9).write(gpx, out));
     }
 
     private static String rootMessage(Throwable e) {

@@ -33,7 +33,7 @@ import org.sightwork.celestial.passage.PassageNoise;
 import org.sightwork.celestial.passage.Reconciliation;
 import org.sightwork.geo.app.Caution;
 import org.sightwork.geo.app.Main;
-import org.sightwork.geo.track.AtomicFiles;
+import org.sightwork.geo.files.SafeWrite;
 import org.sightwork.geo.track.CsvTrackIo;
 import org.sightwork.geo.track.DrLog;
 import org.sightwork.geo.track.GpxTrackIo;
@@ -153,7 +153,7 @@ public final class CompareCommand implements Callable<Integer> {
         out.flush();
         if (report != null) {
             String html = ComparisonReport.html(result, rec, log, track, Caution.TEXT);
-            AtomicFiles.write(report, o -> o.write(html.getBytes(StandardCharsets.UTF_8)));
+            SafeWrite.write(report, o -> o.write(html.getBytes(StandardCharsets.UTF_8)));
             err.println("report written to " + report);
         }
         out.flush();

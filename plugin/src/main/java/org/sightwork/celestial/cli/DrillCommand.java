@@ -23,7 +23,7 @@ import org.sightwork.celestial.drill.ScenarioReader;
 import org.sightwork.celestial.drill.StudentAnswers;
 import org.sightwork.celestial.drill.StudentGrade;
 import org.sightwork.geo.app.Caution;
-import org.sightwork.geo.track.AtomicFiles;
+import org.sightwork.geo.files.SafeWrite;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -167,7 +167,7 @@ public final class DrillCommand implements Callable<Integer> {
                 String content = report.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv")
                         ? r.csv() : r.text();
                 try {
-                    AtomicFiles.write(report, s -> s.write(content.getBytes(StandardCharsets.UTF_8)));
+                    SafeWrite.write(report, s -> s.write(content.getBytes(StandardCharsets.UTF_8)));
                 } catch (IOException e) {
                     return fail(err, "grade", "cannot write " + report + ": " + e.getMessage(), 1);
                 }

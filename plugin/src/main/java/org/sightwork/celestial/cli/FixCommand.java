@@ -38,8 +38,13 @@ import picocli.CommandLine.Spec;
 /** {@code sightwork fix LOG.csv}: groups the sights into fixes and prints each with its ellipse. */
 @Command(name = "fix", mixinStandardHelpOptions = true,
         description = {"Groups the sights of a sight log into fixes (sights within the window make one fix "
-                + "at their mean time, the others advanced along the DR) and prints each fix with its 95%% "
-                + "error ellipse, every sight's residual and the warnings."},
+                + "at their mean time, each carried to it along the DR) and prints each fix with its 95%% "
+                + "error ellipse, every sight's residual and the warnings.",
+            "A window with a single line (a lone Sun sight) is advanced along the DR to the next single "
+                + "sight within --advance-max-h hours, for a running fix at that later sight (morning, noon "
+                + "and afternoon Sun give two running fixes). --running-fix-at makes one running fix from "
+                + "every sight instead.",
+            "Fixes go to standard output; lines that give no fix, and bad rows, to standard error."},
         footer = {"", Caution.TEXT})
 public final class FixCommand implements Callable<Integer> {
 
@@ -56,6 +61,15 @@ public final class FixCommand implements Callable<Integer> {
     @Option(names = "--running-fix-at", paramLabel = "UTC",
             description = "one running fix from all sights at this time (ISO 8601, e.g. 2025-03-14T12:00:00Z)")
     String runningFixAt;
+
+    @Option(names = "--advance-max-h", defaultValue = "4", paramLabel = "HOURS",
+            description = "advance a lone line at most this far to the next lone line for a running fix "
+                    + "(default ${DEFAULT-VALUE}; 0: never)")
+    double advanceMaxH;
+
+    @Option(names = "--per-sight", description = "with --format csv: one row per sight of each fix (its Ho, Hc, "
+            + "Zn, intercept, residual, distance run, left out or not) instead of one row per fix")
+    boolean perSight;
 
     @Option(names = "--ap", paramLabel = "LAT,LON", description = "reduce from this assumed position instead of each DR")
     String ap;
@@ -77,12 +91,19 @@ public final class FixCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** Appended to the message of a lone line: the option that carries it to a chosen time. */
+    static final String RUNNING_FIX_HINT = "; or give --running-fix-at TIME to carry every sight along the DR to "
+            + "TIME (ISO 8601 UTC) for one running fix";
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         if (!(drErrorPct >= 0 && drErrorPct <= 100)) {
             throw new IllegalArgumentException("--dr-error-pct " + drErrorPct + " must be between 0 and 100");
+        }
+        if (perSight && format != OutputFormat.CSV) {
+            throw new IllegalArgumentException("--per-sight goes with --format csv (text and json show every sight)");
         }
         Instant at = null;
         if (runningFixAt != null) {
@@ -99,14 +120,21 @@ public final class FixCommand implements Callable<Integer> {
         List<String> notes = new ArrayList<>();
         List<ReducedSight> sights = averageMin > 0 ? average(in.reduced, notes) : in.reduced;
         List<FixPlanner.Attempt> attempts = at != null ? List.of(FixPlanner.runningFixAt(sights, at, options))
-                : FixPlanner.fixes(sights, windowMin, options);
+                : FixPlanner.fixes(sights, windowMin, advanceMaxH, options);
+        String hint = at == null ? RUNNING_FIX_HINT : "";
         for (FixPlanner.Attempt a : attempts) {
-            a.failure().ifPresent(f -> err.println(log.getFileName() + ": " + f));
+            a.failure().ifPresent(f -> err.println(log.getFileName() + ": " + f + (a.sights().size() == 1 ? hint : "")));
         }
         err.flush();
         switch (format) {
             case TEXT -> text(attempts, notes, out);
-            case CSV -> csv(attempts, out);
+            case CSV -> {
+                if (perSight) {
+                    csvPerSight(attempts, out);
+                } else {
+                    csv(attempts, out);
+                }
+            }
             case JSON -> json(attempts, notes, in, out);
         }
         out.flush();
@@ -189,12 +217,10 @@ public final class FixCommand implements Callable<Integer> {
         }
         for (FixPlanner.Attempt a : attempts) {
             if (a.fix().isEmpty()) {
-                out.println("no fix: " + a.failure().orElse(""));
-                out.println();
-                continue;
+                continue; // said on standard error
             }
             Fix f = a.fix().get();
-            out.printf(Locale.ROOT, "Fix %s  %s%n", f.utc(), f.position());
+            out.printf(Locale.ROOT, "%s %s  %s%n", a.running() ? "Running fix" : "Fix", f.utc(), f.position());
             out.printf(Locale.ROOT, "  95%% ellipse %.1f × %.1f nm, major axis %03.0f°  (%d lines, %d used%s)%n",
                     f.ellipse95().majorNm(), f.ellipse95().minorNm(), f.ellipse95().orientationDeg(), f.lines().size(),
                     f.usedLines().size(), Double.isNaN(f.varianceFactor()) ? ""
@@ -230,6 +256,26 @@ public final class FixCommand implements Callable<Integer> {
         }
     }
 
+    /** Header of {@code --format csv --per-sight}. */
+    static final String PER_SIGHT_HEADER = "fixUtc,running,body,sightUtc,hoDeg,hcDeg,znDeg,interceptNm,residualNm,"
+            + "runNm,leftOut,reason";
+
+    private static void csvPerSight(List<FixPlanner.Attempt> attempts, PrintWriter out) {
+        out.println(PER_SIGHT_HEADER);
+        for (FixPlanner.Attempt a : attempts) {
+            if (a.fix().isEmpty()) {
+                continue;
+            }
+            Fix f = a.fix().get();
+            for (FixLineResult l : f.lines()) {
+                out.printf(Locale.ROOT, "%s,%b,\"%s\",%s,%.6f,%.6f,%.2f,%.3f,%.3f,%.3f,%b,\"%s\"%n", f.utc(), a.running(),
+                        body(l).replace("\"", "\"\""), l.original().utc(), l.original().hoDeg(), l.original().hcDeg(),
+                        l.original().znDeg(), l.original().interceptNm(), l.residualNm(), l.distanceRunNm(),
+                        l.rejected(), l.rejectionReason().orElse("").replace("\"", "\"\""));
+            }
+        }
+    }
+
     private static void json(List<FixPlanner.Attempt> attempts, List<String> notes, SightInput in, PrintWriter out)
             throws Exception {
         ObjectMapper m = ReduceCommand.mapper();
@@ -244,6 +290,7 @@ public final class FixCommand implements Callable<Integer> {
             Fix f = a.fix().get();
             ObjectNode o = fixes.addObject();
             o.put("utc", f.utc().toString());
+            o.put("running", a.running());
             o.put("latDeg", f.position().latDeg());
             o.put("lonDeg", f.position().lonDeg());
             ObjectNode e = o.putObject("ellipse95");

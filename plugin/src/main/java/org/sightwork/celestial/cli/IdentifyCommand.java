@@ -9,8 +9,8 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.sightwork.celestial.almanac.Almanac;
 import org.sightwork.celestial.planning.Identification;
-import org.sightwork.celestial.planning.SextantApprox;
 import org.sightwork.celestial.planning.StarIdentifier;
+import org.sightwork.celestial.sight.Corrections;
 import org.sightwork.geo.app.Caution;
 import org.sightwork.geo.earth.Angles;
 import org.sightwork.geo.earth.GeoPosition;
@@ -64,7 +64,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             if (!(az >= 0.0 && az <= 360.0)) {
                 throw new IllegalArgumentException("azimuth " + az + "° is outside [0°, 360°]");
             }
-            ho = SextantApprox.approxObservedDeg(hs, eyeHeight);
+            ho = StarIdentifier.approxObservedDeg(hs, eyeHeight);
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage(), e);
         }
@@ -95,7 +95,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "Observed at %s from DR %s: Hs %s, azimuth %s%n", PlanCommand.iso(t), pos,
                     Angles.formatDm(hs, 2), PlanCommand.zn(id.azimuthDeg()));
             out.printf(Locale.ROOT, "  altitude used (less dip %.1f′ and refraction): %s%n",
-                    SextantApprox.dipArcmin(eyeHeight), Angles.formatDm(id.observedAltDeg(), 2));
+                    -Corrections.dipArcmin(eyeHeight), Angles.formatDm(id.observedAltDeg(), 2));
             out.printf(Locale.ROOT, "  the point observed: Dec %s, GHA %s, SHA %s%n", Angles.formatDeclination(id.decDeg()),
                     Angles.formatDm(id.ghaDeg(), 3), Angles.formatDm(id.shaDeg(), 3));
             line(out, "best match", id.best());

@@ -107,7 +107,8 @@ public final class DrillGenerator {
             BodyPosition bp = almanac.position(p.body(), at);
             ComputedAltitude trueC = SightReduction.reduce(truth, bp.ghaDeg(), bp.decDeg());
             BodyPosition sun = almanac.position(Body.SUN, at);
-            double sunAlt = SightReduction.reduce(truth, sun.ghaDeg(), sun.decDeg()).hcDeg();
+            ComputedAltitude sunC = SightReduction.reduce(truth, sun.ghaDeg(), sun.decDeg());
+            double sunAlt = sunC.hcDeg();
             Optional<String> refusal = skyRule(p.body(), trueC.hcDeg(), sunAlt);
             if (refusal.isPresent()) {
                 problems.add(who + ": " + refusal.get());
@@ -124,7 +125,8 @@ public final class DrillGenerator {
                     Math.round(dr.lonDeg() * 600.0) / 600.0);
             DrLeg leg = deck.inForceAt(p.utc());
             logged.add(new LoggedSight(p.number(), p.session(), p.body(), p.limb(), p.utc(), watch, hsRead, noise,
-                    ieRead, truth, drWritten, leg.headingDeg(), leg.stwKn(), trueC.hcDeg(), trueC.znDeg(), sunAlt));
+                    ieRead, truth, drWritten, leg.headingDeg(), leg.stwKn(), trueC.hcDeg(), trueC.znDeg(), sunAlt,
+                    SightDescription.of(p.body(), sunC.lhaDeg(), sunAlt)));
         }
         if (!problems.isEmpty()) {
             throw new DrillException(problems);

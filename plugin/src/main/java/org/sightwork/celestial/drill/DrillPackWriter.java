@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.sightwork.geo.track.AtomicFiles;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * Writes a drill to a folder: {@code student/} (hand this out) and {@code key/} (keep this).
@@ -78,7 +78,7 @@ public final class DrillPackWriter {
         for (Map.Entry<String, byte[]> e : files.entrySet()) {
             Path p = dir.resolve(e.getKey());
             Files.createDirectories(p.getParent());
-            AtomicFiles.write(p, out -> out.write(e.getValue()));
+            SafeWrite.write(p, out -> out.write(e.getValue()));
             written.add(p);
         }
         return written;

@@ -24,8 +24,11 @@ import org.sightwork.geo.earth.GeoPosition;
  * @param trueHoDeg the exact observed (geocentric) altitude at the true position and time (degrees)
  * @param trueZnDeg the true azimuth there (degrees)
  * @param sunAltitudeDeg the Sun's geocentric altitude there and then (degrees)
+ * @param description what the sight is, in a navigator's words ({@code forenoon Sun},
+ *     {@code noon Sun (meridian)}, {@code evening stars}; see {@link SightDescription})
  */
 public record LoggedSight(int number, String session, Body body, Limb limb, Instant trueUtc, Instant watchTime,
         double hsDeg, double randomErrorArcmin, double indexReadingArcmin, GeoPosition truePosition, GeoPosition dr,
-        double courseDeg, double speedKn, double trueHoDeg, double trueZnDeg, double sunAltitudeDeg) {
+        double courseDeg, double speedKn, double trueHoDeg, double trueZnDeg, double sunAltitudeDeg,
+        String description) {
 }

@@ -6,19 +6,18 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Optional;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * Reads and writes the session file (JSON, Jackson).
  *
- * <p>Writing: the new content goes to a temporary file in the same folder, is flushed to disk,
- * the current file (if any) is copied to {@code NAME.bak}, and the temporary file is renamed over
- * the current one (atomically where the file system can). A crash at any point leaves either the
- * old or the new file whole.
+ * <p>Writing: through {@link SafeWrite} with {@link SafeWrite.Previous#KEEP_AS_BAK}: the new
+ * content goes to a temporary file in the same folder and is forced to disk, the current file (if
+ * any) becomes {@code NAME.bak}, and the temporary file is renamed over the current one. A crash at
+ * any point leaves either the old or the new file whole.
  *
  * <p>Reading: a file of a newer {@code formatVersion} is opened read-only (it may hold what this
  * version cannot keep); a damaged file (not JSON, or not a session) is reported and its backup,
@@ -105,26 +104,7 @@ public final class SessionFile {
     public static void save(Session session, Path path) throws IOException {
         Session s = new Session(FORMAT_VERSION, session.name(), session.sights(), session.drLegs(), session.gpsTrack(),
                 session.fixes(), session.settings());
-        Path dir = path.toAbsolutePath().getParent();
-        Path tmp = Files.createTempFile(dir, "." + path.getFileName() + ".", ".tmp");
-        try {
-            try (var out = Files.newOutputStream(tmp)) {
-                JSON.writeValue(out, s);
-            }
-            try (var ch = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE)) {
-                ch.force(true);
-            }
-            if (Files.exists(path)) {
-                Files.copy(path, backupOf(path), StandardCopyOption.REPLACE_EXISTING);
-            }
-            try {
-                Files.move(tmp, path, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, path, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        SafeWrite.write(path, SafeWrite.Previous.KEEP_AS_BAK, out -> JSON.writeValue(out, s));
     }
 
     /**
@@ -132,7 +112,7 @@ public final class SessionFile {
      * @return its backup's path ({@code NAME.bak})
      */
     public static Path backupOf(Path path) {
-        return path.resolveSibling(path.getFileName() + ".bak");
+        return SafeWrite.backupOf(path);
     }
 
     private static String firstLine(Exception e) {

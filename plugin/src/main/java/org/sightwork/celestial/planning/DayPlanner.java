@@ -10,6 +10,7 @@ import java.util.function.DoubleUnaryOperator;
 import org.sightwork.celestial.almanac.Almanac;
 import org.sightwork.celestial.almanac.Body;
 import org.sightwork.celestial.almanac.BodyPosition;
+import org.sightwork.celestial.sight.Corrections;
 import org.sightwork.celestial.time.AstroTime;
 import org.sightwork.geo.earth.GeoPosition;
 
@@ -58,6 +59,12 @@ public final class DayPlanner {
     /** Threshold of nautical twilight: the Sun's centre 12° below the horizon (geometric). */
     public static final double NAUTICAL_TWILIGHT_DEG = -12.0;
 
+    /**
+     * Refraction at the horizon used for rising and setting (arcminutes): 34′, the convention of the
+     * almanacs' rise and set tables (from memory; Meeus ch. 15 uses the same −0°34′).
+     */
+    public static final double HORIZON_REFRACTION_ARCMIN = 34.0;
+
     /** Meeus' factor of HP in the Moon's rising altitude, ch. 15 (from memory): 1 − 0.2725. */
     public static final double MOON_RISE_HP_FACTOR = 0.7275;
 
@@ -81,8 +88,8 @@ public final class DayPlanner {
      * @return the times
      */
     public DayEvents dayEvents(ShipTrack track, DayWindow day, double eyeHeightM) {
-        double dipDeg = SextantApprox.dipArcmin(eyeHeightM) / 60.0;
-        double refrDeg = SextantApprox.HORIZON_REFRACTION_ARCMIN / 60.0;
+        double dipDeg = -Corrections.dipArcmin(eyeHeightM) / 60.0; // the sight package's dip, as a depression
+        double refrDeg = HORIZON_REFRACTION_ARCMIN / 60.0;
         Track sun = new Track(Body.SUN, track, day);
         DoubleUnaryOperator sunRiseFn = s -> {
             Sample x = sun.at(s);

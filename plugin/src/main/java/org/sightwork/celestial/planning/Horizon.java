@@ -2,6 +2,9 @@ package org.sightwork.celestial.planning;
 
 import java.util.OptionalDouble;
 import org.sightwork.celestial.almanac.BodyPosition;
+import org.sightwork.celestial.reduction.ComputedAltitude;
+import org.sightwork.celestial.reduction.SightReduction;
+import org.sightwork.celestial.reduction.Sphere;
 import org.sightwork.geo.earth.Earth;
 import org.sightwork.geo.earth.GeoPosition;
 
@@ -9,11 +12,11 @@ import org.sightwork.geo.earth.GeoPosition;
  * The navigational triangle both ways (equator to horizon and back), and the topocentric place of
  * a body for an observer on the WGS84 ellipsoid.
  *
- * <p><b>Method:</b> the rotation between the equatorial and the horizon frame written with
- * {@code atan2} so that every quadrant comes out right: {@code sin Hc = sin φ sin δ + cos φ cos δ cos
- * LHA}, {@code tan Zn = −cos δ sin LHA / (sin δ cos φ − cos δ sin φ cos LHA)} (Meeus,
- * <i>Astronomical Algorithms</i>, 2nd ed., eq. 13.5-13.6, with the azimuth counted from north
- * instead of south; from memory). The topocentric place subtracts the observer's geocentric vector
+ * <p><b>Method:</b> equator to horizon (Hc, Zn) is the reduction package's
+ * {@link SightReduction#reduce}, the navigational triangle a navigator works; horizon to equator is
+ * the same rotation inverted, written with {@code atan2} so that every quadrant comes out right
+ * (Meeus, <i>Astronomical Algorithms</i>, 2nd ed., eq. 13.5-13.6, with the azimuth counted from
+ * north instead of south; from memory). The topocentric place subtracts the observer's geocentric vector
  * (Meeus ch. 11, ρ sin φ′ and ρ cos φ′ on WGS84) from the body's geocentric vector and projects the
  * difference onto the observer's geodetic east-north-up frame.
  *
@@ -37,13 +40,8 @@ public final class Horizon {
      * @return Hc (degrees, geocentric) and Zn (degrees true)
      */
     public static HorizonPoint fromEquatorial(double ghaDeg, double decDeg, GeoPosition at) {
-        double lha = Math.toRadians(ghaDeg + at.lonDeg());
-        double dec = Math.toRadians(decDeg);
-        double lat = Math.toRadians(at.latDeg());
-        double sinH = Math.sin(lat) * Math.sin(dec) + Math.cos(lat) * Math.cos(dec) * Math.cos(lha);
-        double y = -Math.cos(dec) * Math.sin(lha);
-        double x = Math.sin(dec) * Math.cos(lat) - Math.cos(dec) * Math.sin(lat) * Math.cos(lha);
-        return new HorizonPoint(Math.toDegrees(Math.asin(clamp(sinH))), norm360(Math.toDegrees(Math.atan2(y, x))));
+        ComputedAltitude c = SightReduction.reduce(at, ghaDeg, decDeg);
+        return new HorizonPoint(c.hcDeg(), c.znDeg());
     }
 
     /**
@@ -146,11 +144,7 @@ public final class Horizon {
      * @return the same direction in [0°, 360°)
      */
     public static double norm360(double deg) {
-        double r = deg % 360.0;
-        if (r < 0) {
-            r += 360.0;
-        }
-        return r >= 360.0 ? 0.0 : r;
+        return Sphere.normalize360(deg);
     }
 
     /**

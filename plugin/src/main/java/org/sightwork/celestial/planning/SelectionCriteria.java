@@ -1,5 +1,7 @@
 package org.sightwork.celestial.planning;
 
+import org.sightwork.celestial.sight.Corrections;
+
 /**
  * What makes a body a good candidate for a twilight fix, and how many to propose.
  *
@@ -41,7 +43,7 @@ public record SelectionCriteria(int setSize, double minAltDeg, double maxAltDeg,
         if (!(glareAltitudeDeg >= 0.0 && glareAltitudeDeg <= 90.0)) {
             throw new IllegalArgumentException("glare altitude " + glareAltitudeDeg + "° is outside [0°, 90°]");
         }
-        SextantApprox.dipArcmin(eyeHeightM); // checks the height of eye
+        Corrections.dipArcmin(eyeHeightM); // checks the height of eye
     }
 
     /**

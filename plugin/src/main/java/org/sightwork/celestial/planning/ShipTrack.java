@@ -4,22 +4,21 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.Objects;
 import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.earth.Sailings;
 
 /**
  * A dead-reckoning track at constant course and speed: the ship's DR at any instant, by rhumb line
  * from a starting DR.
  *
- * <p><b>Method:</b> Mercator sailing on a sphere (Bowditch, <i>The American Practical Navigator</i>,
- * Pub. 9, 2019 ed., ch. 24 "Navigational calculations", Mercator sailing; from memory): the
- * difference of latitude is {@code d cos C}; the difference of longitude is
- * {@code d sin C / q} with {@code q = Δφ / Δψ}, where {@code Δψ} is the difference of the
- * spherical meridional parts {@code ln tan(π/4 + φ/2)}; on an east-west course {@code q = cos φ}.
+ * <p><b>Method:</b> the rhumb line on the WGS84 ellipsoid of the shell's
+ * {@link Sailings#rhumbDestination} (Snyder 1987 meridian arc and isometric latitude; see there),
+ * run forwards from the start after it and backwards (on the reciprocal course) before it.
  *
- * <p><b>Accuracy:</b> the sphere instead of the WGS84 ellipsoid moves a day's run (500 nm) by up to
- * about 0.5 % of its length in latitude, i.e. a few miles; that changes a sunrise by well under a
- * minute, which is the precision the planning times are given to.
+ * <p><b>Accuracy:</b> that of {@link Sailings} (1e-5 nm against an independent reckoning); the
+ * DR itself is only as good as the course and speed, which is the precision the planning times are
+ * given to (a minute).
  *
- * <p><b>Limits:</b> a rhumb line that would reach within {@value #MAX_ABS_LAT_DEG}° of a pole is
+ * <p><b>Limits:</b> a rhumb line that would reach within {@code 90° − MAX_ABS_LAT_DEG} of a pole is
  * refused (the loxodrome spirals into the pole); longitudes are brought back into [-180°, 180°),
  * so a track crosses the date line without a jump in the hour angles computed from it.
  *
@@ -35,8 +34,6 @@ public record ShipTrack(GeoPosition start, Instant startUtc, double courseDeg, d
 
     /** Fastest speed accepted (knots): beyond any ship's; guards against a unit mistake. */
     public static final double MAX_SPEED_KN = 60.0;
-
-    private static final double NM_PER_DEG = 60.0;
 
     /** Checks the arguments. */
     public ShipTrack {
@@ -71,36 +68,15 @@ public record ShipTrack(GeoPosition start, Instant startUtc, double courseDeg, d
         if (speedKn == 0.0) {
             return start;
         }
-        double hours = Duration.between(startUtc, t).toNanos() / 3.6e12;
-        return step(start, courseDeg, speedKn * hours);
-    }
-
-    /**
-     * The end of a rhumb line of given course and distance on the sphere (Mercator sailing, see the
-     * class comment).
-     *
-     * @param from the starting position
-     * @param courseDeg course true (degrees)
-     * @param distanceNm distance (nautical miles; negative runs the course backwards)
-     * @return the arrival position
-     * @throws IllegalArgumentException if the rhumb line would reach a pole
-     */
-    public static GeoPosition step(GeoPosition from, double courseDeg, double distanceNm) {
-        double c = Math.toRadians(courseDeg);
-        double dLatDeg = distanceNm * Math.cos(c) / NM_PER_DEG;
-        double lat2 = from.latDeg() + dLatDeg;
-        if (Math.abs(lat2) > MAX_ABS_LAT_DEG) {
+        double runNm = speedKn * Duration.between(startUtc, t).toNanos() / 3.6e12;
+        GeoPosition p = runNm >= 0.0
+                ? Sailings.rhumbDestination(start, courseDeg, runNm)
+                : Sailings.rhumbDestination(start, Horizon.norm360(courseDeg + 180.0), -runNm);
+        if (Math.abs(p.latDeg()) > MAX_ABS_LAT_DEG) {
             throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
                     "the track reaches latitude %.1f°: within %.1f° of the pole, where a rhumb line is not"
-                    + " usable", lat2, 90.0 - MAX_ABS_LAT_DEG));
+                    + " usable", p.latDeg(), 90.0 - MAX_ABS_LAT_DEG));
         }
-        double phi1 = Math.toRadians(from.latDeg());
-        double phi2 = Math.toRadians(lat2);
-        double dPsi = Math.log(Math.tan(Math.PI / 4 + phi2 / 2) / Math.tan(Math.PI / 4 + phi1 / 2));
-        double dPhi = phi2 - phi1;
-        // q = Δφ/Δψ, with its limit cos φ on (nearly) east-west courses where both vanish.
-        double q = Math.abs(dPsi) > 1e-12 ? dPhi / dPsi : Math.cos(phi1);
-        double dLonDeg = distanceNm * Math.sin(c) / NM_PER_DEG / q;
-        return GeoPosition.of(lat2, from.lonDeg() + dLonDeg);
+        return p;
     }
 }

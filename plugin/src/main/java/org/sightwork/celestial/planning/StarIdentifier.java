@@ -11,6 +11,8 @@ import java.util.Optional;
 import org.sightwork.celestial.almanac.Almanac;
 import org.sightwork.celestial.almanac.Body;
 import org.sightwork.celestial.almanac.BodyPosition;
+import org.sightwork.celestial.sight.Corrections;
+import org.sightwork.celestial.sight.Sight;
 import org.sightwork.celestial.time.AstroTime;
 import org.sightwork.geo.earth.GeoPosition;
 
@@ -28,7 +30,7 @@ import org.sightwork.geo.earth.GeoPosition;
  *
  * <p><b>Accuracy:</b> as good as the observation: a rough azimuth of ±3° moves the point by about
  * {@code 3° cos H}. The altitude should be corrected for dip and refraction (approximately is
- * enough; see {@link SextantApprox#approxObservedDeg}).
+ * enough; see {@link #approxObservedDeg}).
  *
  * <p><b>Limits:</b> the Sun and the Moon are not candidates (no one needs to identify them).
  *
@@ -126,5 +128,20 @@ public final class StarIdentifier {
         matches.sort(Comparator.comparingDouble(Identification.Match::missDeg));
         return new Identification(t, dr, observedAltDeg, seen.azimuthDeg(), dec, gha, sha, matches.get(0),
                 matches.size() > 1 ? Optional.of(matches.get(1)) : Optional.empty());
+    }
+
+    /**
+     * The approximate observed altitude of a sextant reading: the sight package's dip and
+     * refraction ({@link Corrections}, standard atmosphere) taken off; no parallax, semi-diameter
+     * or index error, which is enough to identify a body.
+     *
+     * @param hsDeg sextant altitude (degrees)
+     * @param eyeHeightM height of eye (metres)
+     * @return the approximate observed altitude above the celestial horizon (degrees)
+     * @throws IllegalArgumentException if the apparent altitude is below -1°, where refraction is unknowable
+     */
+    public static double approxObservedDeg(double hsDeg, double eyeHeightM) {
+        double ha = hsDeg + Corrections.dipArcmin(eyeHeightM) / 60.0;
+        return ha + Corrections.refractionArcmin(ha, Sight.DEFAULT_TEMPERATURE_C, Sight.DEFAULT_PRESSURE_HPA) / 60.0;
     }
 }

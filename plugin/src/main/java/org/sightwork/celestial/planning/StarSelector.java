@@ -13,6 +13,8 @@ import org.hipparchus.linear.RealMatrix;
 import org.sightwork.celestial.almanac.Almanac;
 import org.sightwork.celestial.almanac.Body;
 import org.sightwork.celestial.almanac.BodyPosition;
+import org.sightwork.celestial.sight.Corrections;
+import org.sightwork.celestial.sight.Sight;
 import org.sightwork.celestial.time.AstroTime;
 import org.sightwork.geo.earth.GeoPosition;
 
@@ -68,6 +70,9 @@ public final class StarSelector {
     /** The most candidates enumerated (the brightest); bounds the work at C(25, 5) sets. */
     static final int MAX_CANDIDATES = 25;
 
+    /** Passes of the fixed-point iterations: 0.2^12 of a 34′ start is under 1e-7′. */
+    private static final int ITERATIONS = 12;
+
     private final Almanac almanac;
 
     /**
@@ -106,7 +111,7 @@ public final class StarSelector {
                 continue;
             }
             double hp = p.hpArcmin().orElse(0.0);
-            double preset = SextantApprox.presetHsDeg(h.altitudeDeg(), hp, criteria.eyeHeightM());
+            double preset = presetHsDeg(h.altitudeDeg(), hp, criteria.eyeHeightM());
             double mag = p.magnitude().orElseThrow(
                     () -> new IllegalStateException("the almanac gave no magnitude for " + b.name()));
             Optional<String> why = exclusion(b, h, sun, moon, criteria);
@@ -293,4 +298,33 @@ public final class StarSelector {
         }
         return min;
     }
+
+    /**
+     * The sextant reading to pre-set for a body of computed (geocentric) altitude Hc: the sight
+     * package's corrections run backwards for the body's centre in the standard atmosphere
+     * ({@link Sight#DEFAULT_TEMPERATURE_C}, {@link Sight#DEFAULT_PRESSURE_HPA}), index error not
+     * included: Hc less parallax, plus refraction, plus dip.
+     *
+     * <p>Method: parallax ({@link Corrections#topocentric}, spherical Earth) is a function of the
+     * topocentric altitude and refraction ({@link Corrections#refractionArcmin}) of the apparent
+     * one, so each is found by fixed-point iteration; it converges because neither correction
+     * changes by more than 0.2′ per arcminute of altitude (refraction's steepest, at the horizon).
+     *
+     * @param hcDeg computed altitude (degrees, above 0°)
+     * @param hpArcmin horizontal parallax (arcminutes; 0 for a star)
+     * @param eyeHeightM height of eye (metres)
+     * @return the sextant altitude to pre-set (degrees)
+     */
+    public static double presetHsDeg(double hcDeg, double hpArcmin, double eyeHeightM) {
+        double topo = hcDeg;
+        for (int i = 0; i < ITERATIONS; i++) {
+            topo = hcDeg - Corrections.topocentric(topo, hpArcmin, 0.0, Double.NaN, Double.NaN).parallaxArcmin() / 60.0;
+        }
+        double ha = topo + DayPlanner.HORIZON_REFRACTION_ARCMIN / 60.0; // a start above the refraction floor
+        for (int i = 0; i < ITERATIONS; i++) {
+            ha = topo - Corrections.refractionArcmin(ha, Sight.DEFAULT_TEMPERATURE_C, Sight.DEFAULT_PRESSURE_HPA) / 60.0;
+        }
+        return ha - Corrections.dipArcmin(eyeHeightM) / 60.0;
+    }
+
 }

@@ -2,34 +2,23 @@ package org.sightwork.celestial.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.sightwork.geo.testing.CliRun.run;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.time.Instant;
 import org.junit.jupiter.api.Test;
 import org.sightwork.celestial.almanac.Almanac;
 import org.sightwork.celestial.almanac.Body;
 import org.sightwork.celestial.time.AstroTime;
-import org.sightwork.geo.app.Main;
+import org.sightwork.geo.testing.CliRun;
 
 /** The {@code sightwork almanac} command, run in-process. */
 class AlmanacCommandTest {
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void textTableShowsTheDefaultBodiesInDegreesAndMinutes() {
-        Run r = run("almanac", "--at", "2026-03-20T18:30:00Z");
+        CliRun r = run("almanac", "--at", "2026-03-20T18:30:00Z");
         assertEquals(0, r.code(), r.err());
         for (String b : new String[] {"Sun", "Moon", "Venus", "Mars", "Jupiter", "Saturn", "Aries"}) {
             assertTrue(r.out().contains(b), b + " in\n" + r.out());
@@ -41,7 +30,7 @@ class AlmanacCommandTest {
 
     @Test
     void jsonHasCamelCaseKeysAndNullsWhereNotApplicable() throws Exception {
-        Run r = run("almanac", "--at", "2026-03-20T18:30:00Z", "--bodies", "SUN,aries,Sirius", "--format", "json", "--dut1", "0.1");
+        CliRun r = run("almanac", "--at", "2026-03-20T18:30:00Z", "--bodies", "SUN,aries,Sirius", "--format", "json", "--dut1", "0.1");
         assertEquals(0, r.code(), r.err());
         JsonNode a = new ObjectMapper().readTree(r.out());
         assertEquals(3, a.size());
@@ -58,7 +47,7 @@ class AlmanacCommandTest {
 
     @Test
     void csvForADayHas24HoursPerBody() {
-        Run r = run("almanac", "--day", "2026-03-20", "--bodies", "planets,stars", "--format", "csv");
+        CliRun r = run("almanac", "--day", "2026-03-20", "--bodies", "planets,stars", "--format", "csv");
         assertEquals(0, r.code(), r.err());
         String[] lines = r.out().strip().split("\n");
         assertEquals("body,utc,ghaDeg,decDeg,shaDeg,hpArcmin,sdArcmin,mag", lines[0]);
@@ -68,7 +57,7 @@ class AlmanacCommandTest {
 
     @Test
     void badInputIsAUsageErrorWithAMessage() {
-        Run r = run("almanac", "--bodies", "sun,Siruis");
+        CliRun r = run("almanac", "--bodies", "sun,Siruis");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("Sirius"), r.err());
         r = run("almanac", "--at", "20 March 2026");

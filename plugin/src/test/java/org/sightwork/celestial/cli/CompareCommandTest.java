@@ -4,17 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.sightwork.geo.app.Main;
 import org.sightwork.geo.earth.GeoPosition;
 import org.sightwork.geo.earth.Sailings;
+import org.sightwork.geo.testing.CliRun;
 
 /**
  * {@code compare} on the example sight log (docs/examples/petrel-sights.csv, invented: true track
@@ -42,12 +40,9 @@ class CompareCommandTest {
     }
 
     private static String run(Path gps) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(new String[] {"compare", "--sights", LOG.toString(), "--gps", gps.toString()},
-                new PrintWriter(out), new PrintWriter(err));
-        assertEquals(0, code, err.toString());
-        return out.toString();
+        CliRun r = CliRun.run("compare", "--sights", LOG.toString(), "--gps", gps.toString());
+        assertEquals(0, r.code(), r.err());
+        return r.out();
     }
 
     /** The example's stated true track every minute, optionally set off 090° from 12:00Z. */

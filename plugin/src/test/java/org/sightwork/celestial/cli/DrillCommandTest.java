@@ -2,9 +2,8 @@ package org.sightwork.celestial.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.sightwork.geo.testing.CliRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,21 +14,11 @@ import org.sightwork.celestial.drill.AnswerKey;
 import org.sightwork.celestial.drill.AnswerKeyIo;
 import org.sightwork.celestial.drill.ClassReport;
 import org.sightwork.celestial.drill.StudentAnswers;
-import org.sightwork.geo.app.Main;
 import org.sightwork.geo.earth.Angles;
+import org.sightwork.geo.testing.CliRun;
 
 /** {@code sightwork drill new} and {@code drill grade} end to end, with their exit codes. */
 class DrillCommandTest {
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     private static Path demo(Path dir) throws Exception {
         Path p = dir.resolve("drill-scenario.json");
@@ -42,7 +31,7 @@ class DrillCommandTest {
     @Test
     void newThenGradeAClass(@TempDir Path dir) throws Exception {
         Path out = dir.resolve("drill");
-        Run r = run("drill", "new", demo(dir).toString(), "--seed", "7", "--out", out.toString());
+        CliRun r = run("drill", "new", demo(dir).toString(), "--seed", "7", "--out", out.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(Files.exists(out.resolve("student/exercise.pdf")), r.out());
         assertTrue(Files.exists(out.resolve("key/true-track.nmea")), r.out());
@@ -59,7 +48,7 @@ class DrillCommandTest {
         Path ben = Files.writeString(dir.resolve("ben.csv"), StudentAnswers.HEADER + "\n"
                 + String.format(Locale.ROOT, "sight,1,,,,%s,\n", Angles.formatDm(dipAdded, 2)), StandardCharsets.UTF_8);
         Path report = dir.resolve("class.csv");
-        Run g = run("drill", "grade", out.resolve("key/answer-key.json").toString(), ana.toString(), ben.toString(),
+        CliRun g = run("drill", "grade", out.resolve("key/answer-key.json").toString(), ana.toString(), ben.toString(),
                 "--report", report.toString());
         assertEquals(0, g.code(), g.err());
         assertTrue(g.out().contains("Ana") && g.out().contains("ben"), g.out());
@@ -73,7 +62,7 @@ class DrillCommandTest {
     void aBadScenarioIsAUsageErrorNamingFileAndField(@TempDir Path dir) throws Exception {
         String json = Files.readString(demo(dir)).replace("\"eyeHeightM\": 2.5", "\"eyeHeightM\": -2.5");
         Path bad = Files.writeString(dir.resolve("bad.json"), json);
-        Run r = run("drill", "new", bad.toString(), "--seed", "1", "--out", dir.resolve("o").toString());
+        CliRun r = run("drill", "new", bad.toString(), "--seed", "1", "--out", dir.resolve("o").toString());
         assertEquals(2, r.code(), r.err());
         assertTrue(r.err().contains("bad.json: field observer.eyeHeightM: expected a number in [0.1 m, 50 m], got -2.5"),
                 r.err());
@@ -86,14 +75,14 @@ class DrillCommandTest {
                 "\"2026-06-21T17:10:00Z\", \"body\": \"Vega\"").replace(
                 "\"body\": \"Vega\", \"limb\": \"lower\"", "\"body\": \"Vega\"");
         Path bad = Files.writeString(dir.resolve("day-star.json"), json);
-        Run r = run("drill", "new", bad.toString(), "--seed", "1", "--out", dir.resolve("o").toString());
+        CliRun r = run("drill", "new", bad.toString(), "--seed", "1", "--out", dir.resolve("o").toString());
         assertEquals(1, r.code(), r.err());
         assertTrue(r.err().contains("cannot be made") && r.err().contains("Vega"), r.err());
     }
 
     @Test
     void aMissingKeyIsAUsageError(@TempDir Path dir) {
-        Run r = run("drill", "grade", dir.resolve("nope.json").toString(), dir.resolve("a.csv").toString());
+        CliRun r = run("drill", "grade", dir.resolve("nope.json").toString(), dir.resolve("a.csv").toString());
         assertEquals(2, r.code(), r.err());
         assertTrue(r.err().contains("nope.json: no such file"), r.err());
     }

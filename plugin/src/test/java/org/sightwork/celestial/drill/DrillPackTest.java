@@ -150,4 +150,50 @@ class DrillPackTest {
         assertEquals(AnswerKeyIo.toJson(p.key()), AnswerKeyIo.toJson(k), "the key reads back as written");
         assertEquals(Instant.parse("2026-06-21T08:00:00Z"), p.track().startUtc(), "demo departure");
     }
+
+    /** Regression: the pack came out 0600 (a temporary file's permissions), unreadable to the class. */
+    @Test
+    void theStudentPackIsReadableByOthers(@TempDir java.nio.file.Path dir) throws Exception {
+        org.junit.jupiter.api.Assumptions.assumeTrue(java.nio.file.Files.getFileAttributeView(dir,
+                java.nio.file.attribute.PosixFileAttributeView.class) != null, "POSIX permissions");
+        DrillPack p = DrillGenerator.generate(Scenarios.demo(), 7, ALMANAC);
+        for (java.nio.file.Path f : DrillPackWriter.write(p, dir, false)) {
+            assertTrue(java.nio.file.Files.getPosixFilePermissions(f)
+                    .contains(java.nio.file.attribute.PosixFilePermission.OTHERS_READ), f + " readable by others");
+        }
+    }
+
+    /**
+     * Regression: the note named the session a sight was grouped into ("2026-06-21 noon" on a
+     * forenoon sight at 10:54Z). It now says what the sight is; checked against the Sun's true
+     * azimuth (east of the meridian before noon, the definition of forenoon) and the Sun's altitude.
+     */
+    @Test
+    void theLogsNoteSaysWhatTheSightIs() {
+        DrillPack p = DrillGenerator.generate(Scenarios.demo(), 7, ALMANAC);
+        String csv = new String(DrillPackWriter.files(p).get("student/sight-log.csv"), StandardCharsets.UTF_8);
+        String[] rows = csv.strip().split("\n");
+        boolean sawNoon = false;
+        for (LoggedSight s : p.sights()) {
+            String note = rows[s.number()].substring(rows[s.number()].lastIndexOf(',') + 1);
+            assertTrue(note.startsWith("sight " + s.number() + "; "), note);
+            String what = note.substring(note.indexOf("; ") + 2);
+            if (s.body().name().equals("Sun")) {
+                double offMeridianDeg = Math.abs(s.trueZnDeg() - 180.0); // the demo is in 38°N: noon Sun due south
+                if (offMeridianDeg < 1.0) {
+                    assertEquals("noon Sun (meridian)", what, "Sun at Zn " + s.trueZnDeg());
+                    sawNoon = true;
+                } else {
+                    assertEquals(s.trueZnDeg() < 180.0 ? "forenoon Sun" : "afternoon Sun", what, "Sun at Zn " + s.trueZnDeg());
+                }
+            } else {
+                assertTrue(s.sunAltitudeDeg() < 0.0, "twilight sight of " + s.body().name());
+                assertTrue(what.equals("morning stars") || what.equals("evening stars") || what.endsWith(" Moon"), what);
+                assertEquals(s.trueUtc().toString().startsWith("2026-06-22T05"), what.startsWith("morning"),
+                        "dawn on the 22nd, dusk on the 21st: " + what);
+            }
+            assertFalse(what.contains("2026"), "no session name: " + what);
+        }
+        assertTrue(sawNoon, "the demo has a meridian sight");
+    }
 }

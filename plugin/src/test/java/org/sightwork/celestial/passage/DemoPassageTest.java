@@ -4,13 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.sightwork.geo.app.Main;
+import org.sightwork.geo.testing.CliRun;
 
 /**
  * The bundled demo passage (invented data). Non-regression: the committed files are what
@@ -35,14 +33,12 @@ class DemoPassageTest {
 
     @Test
     void compareFindsTheInventedSpoofing() throws IOException {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
         Path report = tmp.resolve("report.html");
-        int code = Main.run(new String[] {"compare", "--sights", DEMO.resolve("demo-observations.csv").toString(),
+        CliRun r = CliRun.run("compare", "--sights", DEMO.resolve("demo-observations.csv").toString(),
             "--dr", DEMO.resolve("demo-dr.csv").toString(), "--gps", DEMO.resolve("demo-gps.nmea").toString(),
-            "--report", report.toString()}, new PrintWriter(out), new PrintWriter(err));
-        assertEquals(0, code, err.toString());
-        String text = out.toString();
+            "--report", report.toString());
+        assertEquals(0, r.code(), r.err());
+        String text = r.out();
         assertTrue(text.contains("CAUTION"), "the caution is shown");
         assertTrue(text.contains("GPS integrity: INCONSISTENT"), text);
         assertTrue(text.contains("step offset, 2026-06-21T06:59:00Z"), "the step at 07:00 is named: " + text);
@@ -51,20 +47,17 @@ class DemoPassageTest {
         assertTrue(html.contains("<svg"), "inline SVG plots");
         assertTrue(!html.contains("<script") && !html.contains("src=") && !html.contains("href="), "nothing fetched");
         // DR from the log's HDT and VHW when --dr is left out.
-        StringWriter out2 = new StringWriter();
-        int code2 = Main.run(new String[] {"compare", "--sights", DEMO.resolve("demo-observations.csv").toString(),
-            "--gps", DEMO.resolve("demo-gps.nmea").toString(), "--format", "json"}, new PrintWriter(out2),
-                new PrintWriter(new StringWriter()));
-        assertEquals(0, code2, "json run");
-        assertTrue(out2.toString().contains("\"verdict\" : \"inconsistent\""), out2.toString());
+        CliRun json = CliRun.run("compare", "--sights", DEMO.resolve("demo-observations.csv").toString(),
+            "--gps", DEMO.resolve("demo-gps.nmea").toString(), "--format", "json");
+        assertEquals(0, json.code(), "json run");
+        assertTrue(json.out().contains("\"verdict\" : \"inconsistent\""), json.out());
     }
 
     @Test
     void badInputIsAUsageError() {
-        StringWriter err = new StringWriter();
-        int code = Main.run(new String[] {"compare", "--sights", tmp.resolve("missing.csv").toString(), "--gps",
-            DEMO.resolve("demo-gps.nmea").toString()}, new PrintWriter(new StringWriter()), new PrintWriter(err));
-        assertTrue(code != 0, "fails");
-        assertTrue(err.toString().contains("missing.csv"), err.toString());
+        CliRun r = CliRun.run("compare", "--sights", tmp.resolve("missing.csv").toString(), "--gps",
+            DEMO.resolve("demo-gps.nmea").toString());
+        assertTrue(r.code() != 0, "fails");
+        assertTrue(r.err().contains("missing.csv"), r.err());
     }
 }

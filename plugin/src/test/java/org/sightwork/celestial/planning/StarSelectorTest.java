@@ -108,9 +108,9 @@ class StarSelectorTest {
     void presetAltitudeAddsRefractionAndDip() {
         // Refraction at 20° about 2.6′ (Bennett's formula; from memory), dip at 9 m 5.3′ (from memory
         // of the dip table): a star at Hc 20° is pre-set about 7.9′ higher.
-        assertEquals(20.0 + (2.6 + 5.3) / 60.0, SextantApprox.presetHsDeg(20.0, 0.0, 9.0), 0.15 / 60.0, "pre-set Hs");
+        assertEquals(20.0 + (2.6 + 5.3) / 60.0, StarSelector.presetHsDeg(20.0, 0.0, 9.0), 0.15 / 60.0, "pre-set Hs");
         // And the approximate inverse brings a sextant reading back within 0.1′.
-        double hs = SextantApprox.presetHsDeg(20.0, 0.0, 9.0);
-        assertEquals(20.0, SextantApprox.approxObservedDeg(hs, 9.0), 0.1 / 60.0, "Hs back to Ho");
+        double hs = StarSelector.presetHsDeg(20.0, 0.0, 9.0);
+        assertEquals(20.0, StarIdentifier.approxObservedDeg(hs, 9.0), 0.1 / 60.0, "Hs back to Ho");
     }
 }
