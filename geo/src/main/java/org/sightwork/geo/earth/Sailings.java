@@ -171,6 +171,26 @@ public final class Sailings {
     }
 
     /**
+     * Distance along the meridian from the equator to a latitude on WGS84 (Snyder 1987, eq. 3-21).
+     *
+     * @param latDeg latitude (degrees, [-90°, 90°])
+     * @return the meridian arc (nautical miles, negative south)
+     */
+    public static double meridianArcNm(double latDeg) {
+        return meridianArcM(Math.toRadians(latDeg)) / Earth.NAUTICAL_MILE_M;
+    }
+
+    /**
+     * The latitude at a distance along the meridian from the equator (inverse of {@link #meridianArcNm}).
+     *
+     * @param arcNm meridian arc (nautical miles)
+     * @return latitude (degrees, clamped to [-90°, 90°])
+     */
+    public static double latitudeOfMeridianArcNm(double arcNm) {
+        return Math.toDegrees(latitudeOfMeridianArc(arcNm * Earth.NAUTICAL_MILE_M));
+    }
+
+    /**
      * Isometric latitude ψ of a geodetic latitude on WGS84 (Snyder 1987, eq. 7-7).
      *
      * @param phiRad geodetic latitude (radians)

@@ -12,6 +12,6 @@ public final class CelestialCommands implements CommandProvider {
     @Override
     public List<Object> commands() {
         return List.of(new AlmanacCommand(), new ReduceCommand(), new FixCommand(), new PlanCommand(),
-                new IdentifyCommand(), new CompassCommand(), new DrillCommand());
+                new IdentifyCommand(), new CompassCommand(), new DrillCommand(), new CompareCommand());
     }
 }
