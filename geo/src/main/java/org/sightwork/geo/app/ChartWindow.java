@@ -226,6 +226,13 @@ final class ChartWindow implements Shell {
 
     private void addChart(ChartSet chart) {
         model.addChartLayers(BundledChart.entriesOf(chart.layers()));
+        if (!chart.layers().isEmpty()) {
+            tasks.submit("Preparing the chart for every zoom", p -> {
+                chart.generalise(f -> p.update(f, null));
+                requestRepaint();
+                return null;
+            });
+        }
         if (!chart.extentDeg().isNull()) {
             dataExtent.expandToInclude(chart.extentDeg());
         }

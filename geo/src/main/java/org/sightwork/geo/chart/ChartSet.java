@@ -87,6 +87,19 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
         return new ChartSet(prepared, problems, all, detail);
     }
 
+    /**
+     * Generalises every layer for the coarser zoom bands ({@link PreparedLayer#generalise()}). Slow:
+     * call from a worker thread after the first frame; drawing goes on meanwhile.
+     *
+     * @param progress receives the fraction done, [0, 1]
+     */
+    public void generalise(DoubleConsumer progress) {
+        for (int i = 0; i < layers.size(); i++) {
+            layers.get(i).generalise();
+            progress.accept((i + 1.0) / layers.size());
+        }
+    }
+
     private static int drawOrder(FeatureClass c) {
         return switch (c) {
             case DEPTH_AREA -> 0;

@@ -110,18 +110,18 @@ public final class GeoPackageSource {
     private static void readLayer(Path file, GeoPackage gpkg, String table, List<ChartLayer> layers,
             List<ChartProblem> problems) {
         String where = "layer '" + table + "'";
-        FeatureDao dao = gpkg.getFeatureDao(table);
+        SpatialReferenceSystem srs = srsOf(gpkg, table);
         Reprojection reprojection;
         try {
-            reprojection = reprojectionOf(dao.getSrs());
+            reprojection = reprojectionOf(srs);
         } catch (FactoryException | RuntimeException e) {
-            SpatialReferenceSystem srs = dao.getSrs();
             String named = srs == null ? "none" : srs.getOrganization() + ":" + srs.getOrganizationCoordsysId()
                     + " (srs_id " + srs.getSrsId() + ", '" + srs.getSrsName() + "')";
             problems.add(new ChartProblem(file, where, "its coordinate reference system " + named
                     + " is not known (" + rootMessage(e) + "); layer left out"));
             return;
         }
+        FeatureDao dao = gpkg.getFeatureDao(table);
         FeatureClass cls = FeatureClass.ofLayerName(table);
         WKBReader wkb = new WKBReader(new GeometryFactory());
         List<Feature> features = new ArrayList<>();
@@ -174,6 +174,15 @@ public final class GeoPackageSource {
             return;
         }
         layers.add(new ChartLayer(table, file, cls, features, ChartLayer.extentOf(features)));
+    }
+
+    private static SpatialReferenceSystem srsOf(GeoPackage gpkg, String table) {
+        try {
+            var gc = gpkg.getGeometryColumnsDao().queryForTableName(table);
+            return gc == null ? null : gc.getSrs();
+        } catch (java.sql.SQLException e) {
+            throw new IllegalStateException(e.getMessage(), e);
+        }
     }
 
     private static Reprojection reprojectionOf(SpatialReferenceSystem srs) throws FactoryException {

@@ -2,6 +2,7 @@ package org.sightwork.geo.chart;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 import java.util.function.Consumer;
 import org.locationtech.jts.geom.CoordinateSequence;
 import org.locationtech.jts.geom.CoordinateSequenceFilter;
@@ -19,7 +20,9 @@ import org.sightwork.geo.earth.Mercator;
  * A chart layer made ready to draw fast at every zoom: projected once to Mercator metres,
  * generalised once per zoom band, and indexed per band in a JTS {@link STRtree}.
  *
- * <p><b>Method:</b> each band k has a nominal scale of {@link #bandMetresPerPixel(int)} chart metres
+ * <p><b>Method:</b> {@link #prepare} projects the layer and indexes it at full resolution, which is
+ * all the first frame needs; {@link #generalise()} (run next, in the background) fills the coarser
+ * bands. Each band k has a nominal scale of {@link #bandMetresPerPixel(int)} chart metres
  * per pixel and keeps the geometry simplified with the Douglas-Peucker algorithm (JTS
  * {@link DouglasPeuckerSimplifier}, without its validity repair, which is slow and not needed for
  * drawing) to a tolerance of half a pixel at that scale. The renderer picks the coarsest band whose
@@ -32,7 +35,8 @@ import org.sightwork.geo.earth.Mercator;
  * <p><b>Limits:</b> a polygon ring is one part however large; very large rings (a continent at full
  * resolution) should be tiled in the data, as the bundled world base is.
  *
- * <p><b>Thread safety:</b> immutable once built; build on a worker thread, query from any thread.
+ * <p><b>Thread safety:</b> build on a worker thread, query from any thread; a band becomes visible to
+ * queries atomically when it is complete.
  */
 public final class PreparedLayer {
 
@@ -50,19 +54,22 @@ public final class PreparedLayer {
      * @param n number of points
      * @param closed true for a polygon ring
      * @param featureIndex index of the feature in the layer
+     * @param widthM width of the part's envelope (metres)
+     * @param heightM height of the part's envelope (metres)
      */
-    public record Part(double[] xy, int n, boolean closed, int featureIndex) {
+    public record Part(double[] xy, int n, boolean closed, int featureIndex, double widthM, double heightM) {
     }
 
     private final ChartLayer layer;
-    private final STRtree[] bands;
-    private final int[] vertexCounts;
+    private final List<Geometry> projected;
+    private final AtomicReferenceArray<STRtree> bands = new AtomicReferenceArray<>(SIMPLIFIED_BANDS + 1);
+    private final int[] vertexCounts = new int[SIMPLIFIED_BANDS + 1];
     private final Envelope extentM;
+    private volatile boolean generalised;
 
-    private PreparedLayer(ChartLayer layer, STRtree[] bands, int[] vertexCounts, Envelope extentM) {
+    private PreparedLayer(ChartLayer layer, List<Geometry> projected, Envelope extentM) {
         this.layer = layer;
-        this.bands = bands;
-        this.vertexCounts = vertexCounts;
+        this.projected = projected;
         this.extentM = extentM;
     }
 
@@ -89,25 +96,60 @@ public final class PreparedLayer {
             projected.add(g);
             extentM.expandToInclude(g.getEnvelopeInternal());
         }
-        STRtree[] bands = new STRtree[SIMPLIFIED_BANDS + 1];
-        int[] counts = new int[SIMPLIFIED_BANDS + 1];
-        for (int b = 0; b <= SIMPLIFIED_BANDS; b++) {
-            STRtree tree = new STRtree();
-            double tolM = b == SIMPLIFIED_BANDS ? 0 : 0.5 * bandMetresPerPixel(b);
-            for (int i = 0; i < projected.size(); i++) {
-                Geometry g = projected.get(i);
-                if (tolM > 0 && g.getDimension() > 0) {
+        PreparedLayer p = new PreparedLayer(layer, projected, extentM);
+        p.buildBand(SIMPLIFIED_BANDS, projected);
+        return p;
+    }
+
+    /**
+     * Generalises the layer for every coarser band, finest first, each band simplified from the one
+     * below it (a cascade: each step removes fewer vertices from fewer, so all bands cost about 1.3
+     * full-resolution passes). The cascade's tolerances are 3/4 of the band's half pixel, so the
+     * accumulated deviation, at most 3/4 (1 + 1/4 + 1/16 + ...) = 1 times the half pixel, stays within
+     * half a pixel. Until a band is ready, {@link #query} draws from the nearest finer band that is:
+     * correct, only slower. Slow: call from a worker thread; idempotent.
+     */
+    public synchronized void generalise() {
+        if (generalised) {
+            return;
+        }
+        List<Geometry> previous = projected;
+        for (int b = SIMPLIFIED_BANDS - 1; b >= 0; b--) {
+            double tolM = 0.75 * 0.5 * bandMetresPerPixel(b);
+            List<Geometry> simplified = new ArrayList<>(previous.size());
+            for (Geometry g : previous) {
+                if (g.getDimension() > 0 && !g.isEmpty()) {
                     DouglasPeuckerSimplifier s = new DouglasPeuckerSimplifier(g);
                     s.setDistanceTolerance(tolM);
                     s.setEnsureValid(false);
                     g = s.getResultGeometry();
                 }
-                counts[b] += addParts(tree, g, i);
+                simplified.add(g);
             }
-            tree.build();
-            bands[b] = tree;
+            buildBand(b, simplified);
+            previous = simplified;
         }
-        return new PreparedLayer(layer, bands, counts, extentM);
+        generalised = true;
+    }
+
+    /**
+     * Whether every band is ready.
+     *
+     * @return true after {@link #generalise()}
+     */
+    public boolean isGeneralised() {
+        return generalised;
+    }
+
+    private void buildBand(int b, List<Geometry> geoms) {
+        STRtree tree = new STRtree();
+        int count = 0;
+        for (int i = 0; i < geoms.size(); i++) {
+            count += addParts(tree, geoms.get(i), i);
+        }
+        tree.build();
+        vertexCounts[b] = count;
+        bands.set(b, tree);
     }
 
     private static Geometry cutOut(Geometry g, Geometry mask) {
@@ -157,7 +199,8 @@ public final class PreparedLayer {
             xy[2 * i] = seq.getX(i);
             xy[2 * i + 1] = seq.getY(i);
         }
-        tree.insert(line.getEnvelopeInternal(), new Part(xy, n, closed, featureIndex));
+        Envelope e = line.getEnvelopeInternal();
+        tree.insert(e, new Part(xy, n, closed, featureIndex, e.getWidth(), e.getHeight()));
         return n;
     }
 
@@ -223,7 +266,11 @@ public final class PreparedLayer {
      * @param visitor receives each part
      */
     public void query(int band, Envelope areaM, Consumer<Part> visitor) {
-        bands[band].query(areaM, item -> visitor.accept((Part) item));
+        STRtree t = null;
+        for (int b = band; t == null && b <= SIMPLIFIED_BANDS; b++) {
+            t = bands.get(b);
+        }
+        t.query(areaM, item -> visitor.accept((Part) item));
     }
 
     /**

@@ -226,9 +226,8 @@ public final class FxGeoPainter implements GeoPainter {
         gc.setLineDashes((double[]) null);
         for (double off : offsets(at.lonDeg(), at.lonDeg(), 8 * text.length() + Math.abs(dxPx))) {
             double sx = v.screenX(Mercator.eastingM(at.lonDeg() + off)) + dxPx;
-            gc.setStroke(palette.halo());
-            gc.setLineWidth(3);
-            gc.strokeText(text, sx, sy);
+            gc.setFill(palette.halo());
+            gc.fillRect(sx - 2, sy - 1, text.length() * 7.4 + 4, 16);
             gc.setFill(palette.adapt(colour));
             gc.fillText(text, sx, sy);
         }

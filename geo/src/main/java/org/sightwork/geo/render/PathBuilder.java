@@ -15,7 +15,7 @@ import javafx.scene.canvas.GraphicsContext;
 final class PathBuilder {
 
     /** Vertices closer than this to the previous drawn vertex are skipped (pixels). */
-    static final double MIN_STEP_PX = 0.4;
+    static final double MIN_STEP_PX = 0.6;
     /** How far outside the screen the guard rectangle lies (pixels): wider than any stroke. */
     static final double GUARD_PX = 24;
 

@@ -12,12 +12,15 @@ import org.sightwork.geo.chart.PreparedLayer;
  * Paints a prepared chart layer in the style of its feature class: the band for the scale in view,
  * the parts the spatial index finds in view, one path per layer (so that a tiled land layer shows
  * no seams), filled with the even-odd rule (holes and islands in lakes come out right without
- * knowing which ring is which).
+ * knowing which ring is which). Rings and lines under {@link #MIN_PART_PX} across are skipped: at
+ * the world scale they are most of the vertices and none of the picture.
  *
  * <p><b>Thread:</b> that of the graphics context. Allocates nothing per vertex.
  */
 public final class VectorLayerRenderer implements RenderLayer {
 
+    /** Rings and lines smaller than this across, both ways, are not drawn (pixels). */
+    static final double MIN_PART_PX = 0.8;
     private final PreparedLayer layer;
     private final FeatureClass featureClass;
     private int lastVertices;
@@ -60,10 +63,13 @@ public final class VectorLayerRenderer implements RenderLayer {
         area.expandBy(PathBuilder.GUARD_PX * v.metresPerPx());
         int[] count = {0};
         boolean[] anyPoints = {false};
+        double minSizeM = MIN_PART_PX * v.metresPerPx();
         gc.beginPath();
         layer.query(band, area, part -> {
             if (part.n() == 1) {
                 anyPoints[0] = true;
+            } else if (part.widthM() < minSizeM && part.heightM() < minSizeM) {
+                return; // smaller than a pixel: an islet or a pond that would not show
             } else {
                 count[0] += PathBuilder.append(gc, v, part.xy(), part.n(), part.closed(), 0);
             }

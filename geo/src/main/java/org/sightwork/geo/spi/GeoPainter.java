@@ -96,8 +96,8 @@ public interface GeoPainter {
     void marker(GeoPosition at, MarkerShape shape, double sizePx, Stroke stroke, Color fill);
 
     /**
-     * A text label whose top-left corner is offset from a position (on a halo of the chart's
-     * background colour so that it reads on land and sea).
+     * A text label whose top-left corner is offset from a position (on a box of the chart's
+     * halo colour so that it reads on land and sea).
      *
      * @param at the position labelled
      * @param text the text (one line)
