@@ -26,9 +26,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code sightwork compass}: compass error and deviation by the azimuth or amplitude of a body. */
 @Command(name = "compass",
-        description = {"The true azimuth of a body at a time (--at), or its amplitude at rising or setting on",
-            "a day (--date with --amplitude), the compass error from the compass bearing observed, and",
-            "the deviation when the local variation is given."},
+        description = {"The true azimuth of a body at a time (--at), or its amplitude at rising or setting on"
+            + " a day (--date with --amplitude), the compass error from the compass bearing observed, and"
+            + " the deviation when the local variation is given."},
         footer = {"", Caution.TEXT},
         mixinStandardHelpOptions = true)
 public final class CompassCommand implements Callable<Integer> {

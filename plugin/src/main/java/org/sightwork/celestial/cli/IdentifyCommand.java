@@ -22,9 +22,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code sightwork identify}: which star or planet was that, from its altitude and rough azimuth. */
 @Command(name = "identify",
-        description = {"Identifies an unknown star or planet from its sextant altitude and rough azimuth,",
-            "the time and the DR: the declination and hour angle of the point observed, the nearest",
-            "navigational star, planet or catalogue star brighter than 3.5, and the runner-up."},
+        description = {"Identifies an unknown star or planet from its sextant altitude and rough azimuth,"
+            + " the time and the DR: the declination and hour angle of the point observed, the nearest"
+            + " navigational star, planet or catalogue star brighter than 3.5, and the runner-up."},
         footer = {"", Caution.TEXT},
         mixinStandardHelpOptions = true)
 public final class IdentifyCommand implements Callable<Integer> {
@@ -83,6 +83,7 @@ public final class IdentifyCommand implements Callable<Integer> {
             n.put("ghaDeg", id.ghaDeg());
             n.put("shaDeg", id.shaDeg());
             match(n.putObject("best"), id.best());
+            n.put("convincing", id.best().missDeg() <= StarIdentifier.CONVINCING_MISS_DEG);
             if (id.runnerUp().isPresent()) {
                 match(n.putObject("runnerUp"), id.runnerUp().get());
             } else {
@@ -91,13 +92,17 @@ public final class IdentifyCommand implements Callable<Integer> {
             n.put("caution", Caution.TEXT.replace('\n', ' '));
             out.println(m.writeValueAsString(n));
         } else {
-            out.printf(Locale.ROOT, "Observed at %s from DR %s: Hs %s, azimuth %03.0f°%n", PlanCommand.iso(t), pos,
-                    Angles.formatDm(hs, 2), id.azimuthDeg());
+            out.printf(Locale.ROOT, "Observed at %s from DR %s: Hs %s, azimuth %s%n", PlanCommand.iso(t), pos,
+                    Angles.formatDm(hs, 2), PlanCommand.zn(id.azimuthDeg()));
             out.printf(Locale.ROOT, "  altitude used (less dip %.1f′ and refraction): %s%n",
                     SextantApprox.dipArcmin(eyeHeight), Angles.formatDm(id.observedAltDeg(), 2));
             out.printf(Locale.ROOT, "  the point observed: Dec %s, GHA %s, SHA %s%n", Angles.formatDeclination(id.decDeg()),
                     Angles.formatDm(id.ghaDeg(), 3), Angles.formatDm(id.shaDeg(), 3));
             line(out, "best match", id.best());
+            if (id.best().missDeg() > StarIdentifier.CONVINCING_MISS_DEG) {
+                out.printf(Locale.ROOT, "  note: no candidate lies within %.0f° of that point: check the time, altitude"
+                        + " and azimuth%n", StarIdentifier.CONVINCING_MISS_DEG);
+            }
             id.runnerUp().ifPresent(r -> line(out, "runner-up", r));
             out.println(Caution.TEXT);
         }
@@ -106,8 +111,8 @@ public final class IdentifyCommand implements Callable<Integer> {
     }
 
     private static void line(PrintWriter out, String what, Identification.Match m) {
-        out.printf(Locale.ROOT, "  %-10s %-16s miss %5.2f°   Hc %s Zn %03.0f° mag %.1f%n", what, m.body().name(),
-                m.missDeg(), Angles.formatDm(m.hcDeg(), 2), m.znDeg(), m.magnitude());
+        out.printf(Locale.ROOT, "  %-10s %-16s miss %5.2f°   Hc %s Zn %s mag %.1f%n", what, m.body().name(),
+                m.missDeg(), Angles.formatDm(m.hcDeg(), 2), PlanCommand.zn(m.znDeg()), Math.round(m.magnitude() * 10) / 10.0 + 0.0);
     }
 
     private static void match(ObjectNode n, Identification.Match m) {

@@ -17,7 +17,9 @@ import java.time.format.DateTimeParseException;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.sightwork.celestial.almanac.Almanac;
@@ -45,8 +47,8 @@ import picocli.CommandLine.Spec;
  * plans (or a plan at a chosen time), as text or JSON, optionally with the sky plot as a PNG.
  */
 @Command(name = "plan",
-        description = {"The day's sunrise, sunset, twilight, meridian passage, moonrise and moonset at a DR",
-            "that moves with the ship, and the best stars for the morning and evening twilight fixes.",
+        description = {"The day's sunrise, sunset, twilight, meridian passage, moonrise and moonset at a DR"
+            + " that moves with the ship, and the best stars for the morning and evening twilight fixes.",
             "Times are UTC. The day is the zone day at the DR (zone = lon / 15° rounded) unless --utc-day."},
         footer = {"", Caution.TEXT},
         mixinStandardHelpOptions = true)
@@ -93,6 +95,10 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--max-alt", paramLabel = "DEG", defaultValue = "70", description = "highest altitude proposed; default ${DEFAULT-VALUE}°")
     private double maxAlt;
 
+    @Option(names = "--transit", paramLabel = "BODY", split = ",",
+            description = "also the meridian passage (upper transit) of these bodies, e.g. --transit moon,jupiter,sirius")
+    private List<String> transitBodies = new ArrayList<>();
+
     @Option(names = "--sky-png", paramLabel = "FILE", description = "also draw the sky (evening plan, or --at) to this PNG")
     private Path skyPng;
 
@@ -122,7 +128,13 @@ public final class PlanCommand implements Callable<Integer> {
 
         Almanac almanac = Almanac.standard();
         DayWindow window = utcDay ? DayWindow.utcDay(day) : DayWindow.zoneDay(day, track);
-        DayEvents ev = new DayPlanner(almanac).dayEvents(track, window, eyeHeight);
+        DayPlanner planner = new DayPlanner(almanac);
+        DayEvents ev = planner.dayEvents(track, window, eyeHeight);
+        Map<String, Optional<Instant>> transits = new LinkedHashMap<>();
+        for (String name : transitBodies) {
+            Body b = body(spec, almanac, name.strip());
+            transits.put(b.name(), planner.upperTransit(b, track, window));
+        }
         StarSelector selector = new StarSelector(almanac);
         List<Labelled> plans = new ArrayList<>();
         if (atTime.isPresent()) {
@@ -144,9 +156,9 @@ public final class PlanCommand implements Callable<Integer> {
 
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.println(json(track, ev, plans));
+            out.println(json(track, ev, transits, plans));
         } else {
-            text(out, track, ev, plans);
+            text(out, track, ev, transits, plans);
         }
         out.flush();
         return 0;
@@ -156,7 +168,8 @@ public final class PlanCommand implements Callable<Integer> {
     private record Labelled(String heading, String key, Optional<SightPlan> plan) {
     }
 
-    private void text(PrintWriter out, ShipTrack track, DayEvents ev, List<Labelled> plans) {
+    private void text(PrintWriter out, ShipTrack track, DayEvents ev, Map<String, Optional<Instant>> transits,
+            List<Labelled> plans) {
         DayWindow w = ev.day();
         out.printf(Locale.ROOT, "Sight plan for %s (%s), times UTC%n", w.date(),
                 w.zoneHours().isPresent() ? String.format(Locale.ROOT, "zone day, zone %+d: %s to %s",
@@ -173,6 +186,7 @@ public final class PlanCommand implements Callable<Integer> {
         row(out, track, "nautical dusk", ev.nauticalDusk());
         row(out, track, "moonrise", ev.moonrise());
         row(out, track, "moonset", ev.moonset());
+        transits.forEach((name, t) -> row(out, track, "transit " + name, t));
         if (ev.sunDay() == DayEvents.SunDay.ALWAYS_UP) {
             out.println("  the Sun stays above the horizon all day");
         } else if (ev.sunDay() == DayEvents.SunDay.ALWAYS_DOWN) {
@@ -194,12 +208,13 @@ public final class PlanCommand implements Callable<Integer> {
                 out.printf(Locale.ROOT, "  proposed set of %d: HDOP %.2f, smallest azimuth gap %.0f°%n",
                         p.chosen().size(), p.hdop(), p.smallestGapDeg());
             }
-            out.printf(Locale.ROOT, "  %-3s %-16s %9s %6s %5s %10s  %s%n", "", "body", "Hc", "Zn", "mag", "pre-set Hs", "");
+            out.printf(Locale.ROOT, "  %-1s %-16s %9s %5s %5s %10s  %s%n", "", "body", "Hc", "Zn", "mag", "pre-set Hs", "");
             for (VisibleBody b : p.visible()) {
-                out.printf(Locale.ROOT, "  %-3s %-16s %9s %5.0f° %5.1f %10s  %s%n", p.isChosen(b) ? "*" : "",
-                        b.body().name(), Angles.formatDm(b.hcDeg(), 2), b.znDeg(), b.magnitude(),
+                out.printf(Locale.ROOT, "  %-1s %-16s %9s %5s %5.1f %10s  %s%n", p.isChosen(b) ? "*" : "",
+                        b.body().name(), Angles.formatDm(b.hcDeg(), 2), zn(b.znDeg()), Math.round(b.magnitude() * 10) / 10.0 + 0.0,
                         Angles.formatDm(b.presetHsDeg(), 2), b.excludedBecause().orElse(""));
             }
+            out.println("  (* proposed)");
         }
         out.println();
         out.println("Pre-set Hs: Hc less parallax, plus mean refraction and dip; no index error.");
@@ -208,13 +223,13 @@ public final class PlanCommand implements Callable<Integer> {
 
     private static void row(PrintWriter out, ShipTrack track, String what, Optional<Instant> t) {
         if (t.isEmpty()) {
-            out.printf(Locale.ROOT, "  %-17s %s%n", what, "—  (does not happen this day)");
+            out.printf(Locale.ROOT, "  %-20s %s%n", what, "—  (does not happen this day)");
         } else {
-            out.printf(Locale.ROOT, "  %-17s %s   DR %s%n", what, hm(t.get()), track.positionAt(t.get()));
+            out.printf(Locale.ROOT, "  %-20s %s   DR %s%n", what, hm(t.get()), track.positionAt(t.get()));
         }
     }
 
-    private String json(ShipTrack track, DayEvents ev, List<Labelled> plans) {
+    private String json(ShipTrack track, DayEvents ev, Map<String, Optional<Instant>> transits, List<Labelled> plans) {
         ObjectMapper m = mapper();
         ObjectNode root = m.createObjectNode();
         DayWindow w = ev.day();
@@ -243,6 +258,8 @@ public final class PlanCommand implements Callable<Integer> {
         put(root, "moonrise", ev.moonrise());
         put(root, "moonset", ev.moonset());
         root.put("sunDay", ev.sunDay().name());
+        ObjectNode tr = root.putObject("transits");
+        transits.forEach((name, t) -> put(tr, name, t));
         for (Labelled l : plans) {
             if (l.plan().isEmpty()) {
                 root.putNull(l.key());
@@ -293,6 +310,12 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     // --- shared by the planning commands (identify, compass) ---
+
+    /** An azimuth to the whole degree, 000°-359° (359.6° shows as 000°, never 360°). */
+    static String zn(double deg) {
+        long z = Math.round(deg) % 360;
+        return String.format(Locale.ROOT, "%03d°", z);
+    }
 
     static ObjectMapper mapper() {
         return new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

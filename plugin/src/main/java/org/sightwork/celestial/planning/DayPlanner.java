@@ -89,10 +89,13 @@ public final class DayPlanner {
             return x.altDeg - ((x.hpArcmin - x.sdArcmin) / 60.0 - refrDeg - dipDeg);
         };
         List<EventFinder.Crossing> sunCross = EventFinder.crossings(sunRiseFn, day.spanSeconds(), STEP_S);
+        // Twilight is defined for the Sun's centre as seen from the observer: the geocentric
+        // threshold is raised by the parallax (0.15′; it matters only where the Sun skims the
+        // twilight line, near the poles, where a tenth of a minute of arc is a minute of time).
         List<EventFinder.Crossing> civil = EventFinder.crossings(
-                s -> sun.at(s).altDeg - CIVIL_TWILIGHT_DEG, day.spanSeconds(), STEP_S);
+                s -> sun.at(s).altDeg - (CIVIL_TWILIGHT_DEG + sun.at(s).hpArcmin / 60.0), day.spanSeconds(), STEP_S);
         List<EventFinder.Crossing> nautical = EventFinder.crossings(
-                s -> sun.at(s).altDeg - NAUTICAL_TWILIGHT_DEG, day.spanSeconds(), STEP_S);
+                s -> sun.at(s).altDeg - (NAUTICAL_TWILIGHT_DEG + sun.at(s).hpArcmin / 60.0), day.spanSeconds(), STEP_S);
         Optional<Instant> noon = first(EventFinder.transitCrossings(
                 s -> Horizon.norm180(sun.at(s).lhaDeg), day.spanSeconds(), STEP_S), day);
 

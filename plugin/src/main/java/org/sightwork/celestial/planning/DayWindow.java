@@ -72,6 +72,22 @@ public record DayWindow(LocalDate date, Instant startUtc, Instant endUtc, Option
         return new DayWindow(date, s, s.plus(Duration.ofDays(1)), OptionalInt.of(zone));
     }
 
+    /**
+     * The zone day of a zone chosen by the navigator (the ship's clocks), e.g. on the date line
+     * itself, where 180° belongs to zone +12 on one side and -12 on the other.
+     *
+     * @param date the date (zone time)
+     * @param zoneHours the zone (hours east of Greenwich, -12..+14)
+     * @return the day
+     */
+    public static DayWindow ofZone(LocalDate date, int zoneHours) {
+        if (zoneHours < -12 || zoneHours > 14) {
+            throw new IllegalArgumentException("zone " + zoneHours + " h is outside -12..+14 h");
+        }
+        Instant s = midnight(date, zoneHours);
+        return new DayWindow(date, s, s.plus(Duration.ofDays(1)), OptionalInt.of(zoneHours));
+    }
+
     private static Instant midnight(LocalDate date, int zoneHours) {
         return date.atStartOfDay(ZoneOffset.ofHours(zoneHours)).toInstant();
     }

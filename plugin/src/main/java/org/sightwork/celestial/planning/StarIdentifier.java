@@ -39,6 +39,16 @@ public final class StarIdentifier {
     /** Catalogue stars brighter than this magnitude are candidates (brightest a sextant will take). */
     public static final double CATALOGUE_MAG_LIMIT = 3.5;
 
+    /**
+     * A best match further than this from the observed point is reported as doubtful (degrees):
+     * a hand-bearing compass read to 2°-3° and a rough altitude put the point within about 3° of
+     * the star (common practice).
+     */
+    public static final double CONVINCING_MISS_DEG = 5.0;
+
+    /** Catalogue entries closer than this to a brighter one are one star to the eye (degrees). */
+    static final double SAME_STAR_DEG = 0.05;
+
     private final Almanac almanac;
     private final List<Body> candidates;
 
@@ -53,11 +63,25 @@ public final class StarIdentifier {
         for (Body b : List.of(Body.VENUS, Body.MARS, Body.JUPITER, Body.SATURN)) {
             byName.put(b.name(), b);
         }
-        for (Body b : almanac.navigationalStars()) {
-            byName.putIfAbsent(b.name(), b);
-        }
-        for (Body b : almanac.catalogueStars(CATALOGUE_MAG_LIMIT)) {
-            byName.putIfAbsent(b.name(), b);
+        // Stars: the 58 first, then the catalogue brightest first; a catalogue entry within
+        // SAME_STAR_DEG of a star already kept is the other component of a double (e.g. α¹ and α²
+        // Crucis, 4″ apart) and is one point of light in the sextant: it is left out.
+        Almanac.Snapshot epoch = almanac.at(AstroTime.ofUtc(java.time.Instant.parse("2000-01-01T12:00:00Z")));
+        List<BodyPosition> kept = new ArrayList<>();
+        List<Body> stars = new ArrayList<>(almanac.navigationalStars());
+        almanac.catalogueStars(CATALOGUE_MAG_LIMIT).stream()
+                .sorted(Comparator.comparingDouble(almanac::starMagnitude)).forEach(stars::add);
+        for (Body b : stars) {
+            if (byName.containsKey(b.name())) {
+                continue;
+            }
+            BodyPosition p = epoch.position(b);
+            boolean twin = kept.stream().anyMatch(
+                    k -> Horizon.separationDeg(k.decDeg(), -k.ghaDeg(), p.decDeg(), -p.ghaDeg()) < SAME_STAR_DEG);
+            if (!twin) {
+                byName.put(b.name(), b);
+                kept.add(p);
+            }
         }
         this.candidates = List.copyOf(byName.values());
     }

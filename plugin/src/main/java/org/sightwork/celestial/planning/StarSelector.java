@@ -59,6 +59,12 @@ public final class StarSelector {
     /** The Sun's altitude below which the sea horizon is usually too dark (degrees): nautical twilight. */
     public static final double DARK_HORIZON_SUN_ALT_DEG = -12.0;
 
+    /**
+     * Brighter than this counts the same in the tie-break (magnitude): the Moon or Venus is no easier
+     * to bring down to the horizon than Sirius; our own choice.
+     */
+    public static final double BRIGHT_ENOUGH_MAG = -1.5;
+
     /** The most candidates enumerated (the brightest); bounds the work at C(25, 5) sets. */
     static final int MAX_CANDIDATES = 25;
 
@@ -124,6 +130,19 @@ public final class StarSelector {
         chosen.sort(Comparator.comparingDouble(VisibleBody::znDeg));
         List<Double> zns = chosen.stream().map(VisibleBody::znDeg).toList();
         return new SightPlan(t, dr, sun.altitudeDeg(), visible, chosen, hdop(zns), smallestGapDeg(zns), notes);
+    }
+
+    /**
+     * The well-placed bodies for a fix at a time and place, best set first: the short form of
+     * {@link #plan} for the drill generator.
+     *
+     * @param t the time
+     * @param dr the observer's position
+     * @param count 3, 4 or 5
+     * @return the proposed bodies by azimuth; empty if too few qualify
+     */
+    public List<VisibleBody> wellPlacedBodies(Instant t, GeoPosition dr, int count) {
+        return plan(t, dr, SelectionCriteria.DEFAULT.withSetSize(count)).chosen();
     }
 
     private static Optional<String> exclusion(Body b, HorizonPoint h, HorizonPoint sun, HorizonPoint moon,
@@ -208,7 +227,7 @@ public final class StarSelector {
             }
             double mag = 0;
             for (int i : sets.get(s)) {
-                mag += cands.get(i).magnitude();
+                mag += Math.max(cands.get(i).magnitude(), BRIGHT_ENOUGH_MAG);
             }
             if (mag < pickMag) {
                 pickMag = mag;

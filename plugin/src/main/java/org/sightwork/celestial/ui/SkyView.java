@@ -7,6 +7,9 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
@@ -66,6 +69,9 @@ public final class SkyView extends Canvas {
 
     private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm'Z'", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
+
+    /** JavaFX's own logger, held so that its level stays set. */
+    private static final java.util.logging.Logger FX_LOGGER = java.util.logging.Logger.getLogger("javafx");
 
     private SightPlan plan;
 
@@ -176,22 +182,28 @@ public final class SkyView extends Canvas {
         g.setFill(DIM);
         g.fillText(String.format(Locale.ROOT, "Sun %s", Angles.formatDm(plan.sunAltitudeDeg(), 2)), w - 8, 6);
 
-        // Dim ones first, so that the chosen set is drawn on top.
-        for (int pass = 0; pass < 3; pass++) {
-            for (VisibleBody b : plan.visible()) {
-                boolean chosen = plan.isChosen(b);
-                int want = chosen ? 2 : b.eligible() ? 1 : 0;
-                if (want == pass) {
-                    drawBody(g, b, chosen);
-                }
-            }
+        // Dots: dim ones first, so that the chosen set is drawn on top; labels the other way round,
+        // the chosen set first, each put where it overlaps no label already placed.
+        List<VisibleBody> order = new ArrayList<>(plan.visible());
+        order.sort(Comparator.comparingInt(b -> plan.isChosen(b) ? 2 : b.eligible() ? 1 : 0));
+        for (VisibleBody b : order) {
+            drawDot(g, b, plan.isChosen(b));
+        }
+        List<double[]> placed = new ArrayList<>();
+        for (int i = order.size() - 1; i >= 0; i--) {
+            drawLabel(g, order.get(i), plan.isChosen(order.get(i)), placed);
         }
     }
 
-    private void drawBody(GraphicsContext g, VisibleBody b, boolean chosen) {
+    private double dotRadiusOf(VisibleBody b) {
+        Body body = b.body();
+        return body.kind() == Body.Kind.MOON || body.kind() == Body.Kind.SUN ? 8.0 : dotRadius(b.magnitude());
+    }
+
+    private void drawDot(GraphicsContext g, VisibleBody b, boolean chosen) {
         double[] p = toCanvas(b.hcDeg(), b.znDeg());
         Body body = b.body();
-        double r = body.kind() == Body.Kind.MOON || body.kind() == Body.Kind.SUN ? 8.0 : dotRadius(b.magnitude());
+        double r = dotRadiusOf(b);
         Color fill = body.kind() == Body.Kind.MOON ? MOON : body.kind() == Body.Kind.SUN ? PLANET
                 : body.isPlanet() ? PLANET : INK;
         if (!b.eligible() && !chosen) {
@@ -205,13 +217,42 @@ public final class SkyView extends Canvas {
             double rr = r + 4.0;
             g.strokeOval(p[0] - rr, p[1] - rr, 2 * rr, 2 * rr);
         }
-        boolean right = p[0] <= getWidth() / 2.0 + horizonRadius() * 0.55;
-        g.setTextAlign(right ? TextAlignment.LEFT : TextAlignment.RIGHT);
+    }
+
+    private void drawLabel(GraphicsContext g, VisibleBody b, boolean chosen, List<double[]> placed) {
+        double[] p = toCanvas(b.hcDeg(), b.znDeg());
+        double r = dotRadiusOf(b) + (chosen ? 7 : 3);
+        double size = chosen ? 12 : 9.5;
+        String text = String.format(Locale.ROOT, "%s %.1f", b.body().name(),
+                Math.round(b.magnitude() * 10) / 10.0 + 0.0);
+        double w = text.length() * size * 0.58;
+        double h = size + 2;
+        boolean preferRight = p[0] <= getWidth() / 2.0 + horizonRadius() * 0.55;
+        double[][] tries = {
+            {preferRight ? r : -r - w, -h / 2}, {preferRight ? -r - w : r, -h / 2},
+            {preferRight ? r : -r - w, -h - r / 2}, {preferRight ? r : -r - w, r / 2},
+            {-w / 2, -h - r}, {-w / 2, r}};
+        double[] box = null;
+        for (double[] t : tries) {
+            double[] cand = {p[0] + t[0], p[1] + t[1], w, h};
+            if (placed.stream().noneMatch(q -> overlaps(q, cand))) {
+                box = cand;
+                break;
+            }
+        }
+        if (box == null) {
+            box = new double[] {p[0] + tries[0][0], p[1] + tries[0][1], w, h};
+        }
+        placed.add(box);
+        g.setTextAlign(TextAlignment.LEFT);
         g.setTextBaseline(VPos.CENTER);
-        double dx = (r + (chosen ? 7 : 3)) * (right ? 1 : -1);
-        g.setFont(chosen ? Font.font("System", FontWeight.BOLD, 12) : Font.font("System", 9.5));
+        g.setFont(chosen ? Font.font("System", FontWeight.BOLD, size) : Font.font("System", size));
         g.setFill(chosen ? CHOSEN : b.eligible() ? INK : DIM);
-        g.fillText(String.format(Locale.ROOT, "%s %.1f", body.name(), b.magnitude()), p[0] + dx, p[1]);
+        g.fillText(text, box[0], box[1] + h / 2);
+    }
+
+    private static boolean overlaps(double[] a, double[] b) {
+        return a[0] < b[0] + b[2] && b[0] < a[0] + a[2] && a[1] < b[1] + b[3] && b[1] < a[1] + a[3];
     }
 
     /**
@@ -280,6 +321,9 @@ public final class SkyView extends Canvas {
         if (System.getProperty("prism.order") == null) {
             System.setProperty("prism.order", "sw");
         }
+        // JavaFX warns that it runs from the class path, not as modules: true and harmless here
+        // (the launcher's class path), so that one start-up warning is not shown to the user.
+        FX_LOGGER.setLevel(java.util.logging.Level.SEVERE);
         CompletableFuture<Void> started = new CompletableFuture<>();
         try {
             Platform.startup(() -> started.complete(null));
