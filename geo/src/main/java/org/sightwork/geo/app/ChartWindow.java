@@ -519,6 +519,11 @@ final class ChartWindow implements Shell {
         map.showArea(southDeg, westDeg, northDeg, eastDeg);
     }
 
+    @Override
+    public javafx.scene.image.WritableImage renderChart() {
+        return map.renderToImage();
+    }
+
     List<String> pluginNames() {
         return new ArrayList<>(plugins.names());
     }
