@@ -251,10 +251,13 @@ public final class CelestialPlugin implements ChartPlugin {
         fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(what, pattern));
         fc.setInitialFileName(model.passage().title().replaceAll("[^A-Za-z0-9._-]+", "-") + pattern.substring(1));
         var f = fc.showSaveDialog(window());
-        if (f == null) {
-            return;
+        if (f != null) {
+            exportTo(what, f.toPath(), work);
         }
-        Path target = f.toPath();
+    }
+
+    /** Writes an export on a worker thread and says where (FX thread). */
+    private void exportTo(String what, Path target, FileWork work) {
         ctx.runInBackground("Exporting " + what, progress -> {
             work.write(target);
             return target;
@@ -262,12 +265,19 @@ public final class CelestialPlugin implements ChartPlugin {
     }
 
     private void exportPng() {
-        if (log.getScene() == null) {
-            return;
-        }
-        // The chart view as it is on the screen: the window's picture (chart, overlays and panels).
-        WritableImage img = log.getScene().snapshot(null);
+        // The chart view as it is now, painted by the shell's renderer (no panels or menus).
+        WritableImage img = ctx.renderChart();
         export("PNG", "*.png", f -> PngExport.write(img, f));
+    }
+
+    /**
+     * Writes the chart view as it is now to a PNG file, without asking for the file (FX thread).
+     *
+     * @param target the file
+     */
+    void exportChartPng(Path target) {
+        WritableImage img = ctx.renderChart();
+        exportTo("PNG", target, f -> PngExport.write(img, f));
     }
 
     private void openDialog() {

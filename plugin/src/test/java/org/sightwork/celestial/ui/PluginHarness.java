@@ -125,6 +125,7 @@ final class PluginHarness implements PluginContext {
      * @return the picture
      */
     BufferedImage render(Viewport v) {
+        lastRendered = v;
         Canvas canvas = new Canvas(v.widthPx(), v.heightPx());
         renderer.render(canvas.getGraphicsContext2D(), v, chart.paletteProperty().get(), chart.paintingOrder(),
                 e -> {
@@ -286,6 +287,19 @@ final class PluginHarness implements PluginContext {
     @Override
     public void showArea(double southDeg, double westDeg, double northDeg, double eastDeg) {
         shown = Viewport.fitting(southDeg, westDeg, northDeg, eastDeg, 1200, 800);
+    }
+
+    /** The view of the last {@link #render}, for {@link #renderChart}. */
+    private Viewport lastRendered;
+
+    @Override
+    public WritableImage renderChart() {
+        Viewport v = lastRendered != null ? lastRendered : shown;
+        Canvas canvas = new Canvas(v.widthPx(), v.heightPx());
+        renderer.render(canvas.getGraphicsContext2D(), v, chart.paletteProperty().get(), chart.paintingOrder(), e -> {
+            throw e;
+        });
+        return canvas.snapshot(null, null);
     }
 
     @Override
