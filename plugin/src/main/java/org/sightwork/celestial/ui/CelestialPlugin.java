@@ -50,8 +50,8 @@ public final class CelestialPlugin implements ChartPlugin {
     static final double AUTOSAVE_SECONDS = 60;
     /** The demo resources, beside this class. */
     static final String DEMO = "/org/sightwork/celestial/demo/";
-    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps-clean.nmea",
-            "demo-sights.csv");
+    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps.nmea", "demo-dr.csv",
+            "demo-sights.csv", "README.md");
 
     private PluginContext ctx;
     private PassageModel model;
@@ -60,6 +60,7 @@ public final class CelestialPlugin implements ChartPlugin {
     private ResultsPanel worksheet;
     private RecentFiles recent;
     private Timeline autosave;
+    private SkyPanel sky;
     private final List<Overlay> overlays = new ArrayList<>();
 
     /** The no-argument constructor ServiceLoader needs. */
@@ -107,6 +108,8 @@ public final class CelestialPlugin implements ChartPlugin {
             ctx.addPanel("Sight worksheet", scroll(worksheet));
             ctx.addPanel("Fix", scroll(new FixPanel(model)));
             ctx.addPanel("Passage", new PassagePanel(model, ctx.passageTime()));
+            sky = new SkyPanel(model, ctx.passageTime());
+            ctx.addPanel("Sky", sky);
             ctx.addChartClickListener(at -> {
                 switch (log.clickMode()) {
                     case PICK_DR -> log.picked(SightColumn.DR, at);
@@ -392,6 +395,9 @@ public final class CelestialPlugin implements ChartPlugin {
     public void stop() {
         if (autosave != null) {
             autosave.stop();
+        }
+        if (sky != null) {
+            sky.stop();
         }
     }
 }
