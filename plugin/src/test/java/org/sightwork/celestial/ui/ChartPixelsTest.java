@@ -105,10 +105,13 @@ class ChartPixelsTest {
         }
     }
 
+    /** Whether a screen point is under one of the labels placed at the last frame (their halos hide lines). */
     private static boolean inBoxes(double x, double y, List<Drawn> all, Viewport v) {
-        for (Drawn d : all) {
-            double[] b = d.box(v);
-            if (x >= b[0] && x <= b[2] && y >= b[1] && y <= b[3]) {
+        List<PlotOverlays.PlacedLabel> labels = HeadlessFx.call(() -> h.plugin.painters().placedLabels());
+        for (PlotOverlays.PlacedLabel l : labels) {
+            double lx = PluginHarness.x(v, l.place().at()) + l.place().dxPx();
+            double ly = PluginHarness.y(v, l.place().at()) + l.place().dyPx();
+            if (x >= lx - 4 && x <= lx + l.text().length() * 7.4 + 4 && y >= ly - 3 && y <= ly + 17) {
                 return true;
             }
         }
@@ -236,6 +239,8 @@ class ChartPixelsTest {
         });
         Plot plot = HeadlessFx.call(() -> h.plugin.model().plot().get());
         assertEquals(2, plot.fixes().size(), "the running fix and the twilight fix");
+        assertTrue(plot.fixes().get(0).isRunning(), "the day's Sun lines make a running fix");
+        assertFalse(plot.fixes().get(1).isRunning(), "the twilight round (7.5 min) is a fix, not a running fix");
         for (Plot.FixResult fr : plot.fixes()) {
             Fix f = fr.fix().orElseThrow();
             Viewport v = viewAt(f.position());
@@ -253,7 +258,14 @@ class ChartPixelsTest {
             double a = f.ellipse95().majorNm();
             double b = f.ellipse95().minorNm();
             double th = Math.toRadians(f.ellipse95().orientationDeg());
-            double[] label = {cx + 10 - 4, cy + 6 - 3, cx + 10 + 40 * 7.4, cy + 6 + 17};
+            double[] label = {-1, -1, -1, -1};
+            for (PlotOverlays.PlacedLabel l : HeadlessFx.call(() -> h.plugin.painters().placedLabels())) {
+                if (l.text().endsWith(" " + fr.name()) && l.text().contains("Fix ")) {
+                    double lx = PluginHarness.x(v, l.place().at()) + l.place().dxPx();
+                    double ly = PluginHarness.y(v, l.place().at()) + l.place().dyPx();
+                    label = new double[] {lx - 4, ly - 3, lx + l.text().length() * 7.4 + 4, ly + 17};
+                }
+            }
             int checked = 0;
             for (int k = 0; k < 24; k++) {
                 double t = Math.toRadians(15 * k);
@@ -301,13 +313,16 @@ class ChartPixelsTest {
 
         BufferedImage[] img = new BufferedImage[2];
         Instant[] set = new Instant[2];
+        List<PlotOverlays.PlacedLabel> labels = new ArrayList<>();
         HeadlessFx.run(() -> {
             panel.slider().setValue(f1);
             set[0] = h.passageTime().get();
             img[0] = h.render(v);
+            labels.addAll(h.plugin.painters().placedLabels());
             panel.slider().setValue(f2);
             set[1] = h.passageTime().get();
             img[1] = h.render(v);
+            labels.addAll(h.plugin.painters().placedLabels());
         });
         assertEquals(t1, set[0], "the slider at " + f1 + " of the DR log's span sets the passage time");
         assertEquals(t2, set[1], "and at " + f2);
@@ -322,16 +337,23 @@ class ChartPixelsTest {
         assertTrue(count(img[0], x2, y2, PlotStyle.DR) <= 12, "no marker yet at the DR at " + t2);
         assertTrue(count(img[1], x2, y2, PlotStyle.DR) >= 25, "marker moved to the DR at " + t2);
         assertTrue(count(img[1], x1, y1, PlotStyle.DR) <= 12, "marker gone from the DR at " + t1);
-        // Every changed pixel is at one of the two markers or their labels ("DR hh:mm", 9 px right, 18 up).
+        // Every changed pixel is at one of the two markers or under a label of either frame (the
+        // labels are placed afresh when the marker moves: an hour label may give way to "DR hh:mm").
         for (int y = 0; y < SIZE_PX; y++) {
             for (int x = 0; x < SIZE_PX; x++) {
                 if (img[0].getRGB(x, y) != img[1].getRGB(x, y)) {
                     boolean explained = false;
                     for (double[] c : new double[][] {{x1, y1}, {x2, y2}}) {
+                        // the label "DR hh:mm" at one of its four places (9 px right or left, 18 up or 4 down)
                         explained |= Math.hypot(x - c[0], y - c[1]) <= 10
-                                || (x >= c[0] + 9 - 3 && x <= c[0] + 9 + 8 * 7.4 + 3 && y >= c[1] - 18 - 2 && y <= c[1] - 18 + 17);
+                                || (Math.abs(x - c[0]) <= 9 + 8 * 7.4 + 8 && y >= c[1] - 18 - 3 && y <= c[1] + 4 + 17);
                     }
-                    assertTrue(explained, "pixel (" + x + ", " + y + ") changed away from the DR markers");
+                    for (PlotOverlays.PlacedLabel l : labels) {
+                        double lx = PluginHarness.x(v, l.place().at()) + l.place().dxPx();
+                        double ly = PluginHarness.y(v, l.place().at()) + l.place().dyPx();
+                        explained |= x >= lx - 3 && x <= lx + l.text().length() * 7.4 + 3 && y >= ly - 2 && y <= ly + 16;
+                    }
+                    assertTrue(explained, "pixel (" + x + ", " + y + ") changed away from the DR markers and labels");
                 }
             }
         }
