@@ -325,9 +325,15 @@ public final class CelestialPlugin implements ChartPlugin {
         FileChooser fc = new FileChooser();
         fc.setTitle("Save passage as");
         fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Sightwork passage", "*.json"));
+        fc.setInitialFileName(model.passage().title().replaceAll("[^A-Za-z0-9._-]+", "-") + ".json");
         var f = fc.showSaveDialog(window());
         if (f != null) {
-            saveTo(f.toPath(), true);
+            Path p = f.toPath();
+            // A name typed without an extension gets the passage extension, so that Open finds it.
+            if (!p.getFileName().toString().contains(".")) {
+                p = p.resolveSibling(p.getFileName() + ".json");
+            }
+            saveTo(p, true);
         }
     }
 
@@ -340,6 +346,7 @@ public final class CelestialPlugin implements ChartPlugin {
     void saveTo(Path file, boolean tell) {
         Passage snapshot = model.passage().copy();
         Plot plot = model.plot().get();
+        boolean existed = java.nio.file.Files.exists(file);
         ctx.runInBackground("Saving passage", progress -> {
             PassageFiles.save(snapshot, plot, file);
             return file;
@@ -353,7 +360,8 @@ public final class CelestialPlugin implements ChartPlugin {
                 ctx.notify(Severity.WARNING, "The recent-files list could not be written: " + e.getMessage());
             }
             if (tell) {
-                ctx.notify(Severity.INFO, "Passage saved: " + f + " (previous version kept as .bak)");
+                ctx.notify(Severity.INFO, "Passage saved: " + f + (existed ? " (previous version kept as "
+                        + org.sightwork.celestial.io.SessionFile.backupOf(f).getFileName() + ")" : ""));
             }
         }, Platform::runLater);
     }
