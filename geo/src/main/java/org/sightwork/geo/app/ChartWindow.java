@@ -112,14 +112,19 @@ final class ChartWindow implements Shell {
         StackPane.setAlignment(notices, Pos.TOP_RIGHT);
         centre.getChildren().add(notices);
         root.setTop(menuBar);
-        root.setCenter(centre);
         dock.setPadding(new Insets(4));
         dock.setPrefWidth(260);
         dock.getChildren().add(titled("Layers", layerList()));
         ScrollPane dockScroll = new ScrollPane(dock);
         dockScroll.setFitToWidth(true);
         dockScroll.setPrefWidth(270);
-        root.setRight(dockScroll);
+        // The dock beside the chart in a split pane: the user drags the divider to give the panels
+        // (a wide table, say) more room; the chart keeps the rest when the window is resized.
+        javafx.scene.control.SplitPane split = new javafx.scene.control.SplitPane(centre, dockScroll);
+        split.setDividerPositions(0.74);
+        javafx.scene.control.SplitPane.setResizableWithParent(dockScroll, false);
+        dockScroll.setMinWidth(200);
+        root.setCenter(split);
         root.setBottom(statusBar());
 
         Scene scene = new Scene(root, 1400, 900);
@@ -552,6 +557,11 @@ final class ChartWindow implements Shell {
 
     Label cursorLabel() {
         return cursorLabel;
+    }
+
+    @Override
+    public javafx.scene.image.WritableImage renderChart() {
+        return map.renderToImage();
     }
 
     List<String> pluginNames() {

@@ -28,6 +28,8 @@ public final class HeadlessChart implements Shell {
     private final ChartRenderer renderer = new ChartRenderer();
     private final PluginHost plugins = new PluginHost(this);
     private Viewport requestedArea;
+    private double[] requestedBounds;
+    private Viewport lastRendered;
 
     /**
      * A headless chart.
@@ -74,11 +76,29 @@ public final class HeadlessChart implements Shell {
      * @return the image (ARGB)
      */
     public BufferedImage render(Viewport viewport) {
+        return SwingFXUtils.fromFXImage(paint(viewport), null);
+    }
+
+    private WritableImage paint(Viewport viewport) {
+        lastRendered = viewport;
         Canvas canvas = new Canvas(viewport.widthPx(), viewport.heightPx());
         renderer.render(canvas.getGraphicsContext2D(), viewport, model.paletteProperty().get(),
                 model.paintingOrder(), e -> notify(Severity.ERROR, "A layer failed to paint: " + e.getMessage()));
-        WritableImage img = canvas.snapshot(null, null);
-        return SwingFXUtils.fromFXImage(img, null);
+        return canvas.snapshot(null, null);
+    }
+
+    /** Size of the picture of {@link #renderChart} before anything was rendered (pixels). */
+    static final int DEFAULT_WIDTH_PX = 1200;
+    static final int DEFAULT_HEIGHT_PX = 800;
+
+    @Override
+    public WritableImage renderChart() {
+        Viewport v = lastRendered;
+        if (v == null) {
+            double[] b = requestedBounds != null ? requestedBounds : new double[] {-60, -180, 75, 180};
+            v = Viewport.fitting(b[0], b[1], b[2], b[3], DEFAULT_WIDTH_PX, DEFAULT_HEIGHT_PX);
+        }
+        return paint(v);
     }
 
     /**
@@ -143,5 +163,6 @@ public final class HeadlessChart implements Shell {
     @Override
     public void showArea(double southDeg, double westDeg, double northDeg, double eastDeg) {
         requestedArea = Viewport.fitting(southDeg, westDeg, northDeg, eastDeg, 100, 100);
+        requestedBounds = new double[] {southDeg, westDeg, northDeg, eastDeg};
     }
 }

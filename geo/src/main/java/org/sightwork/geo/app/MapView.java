@@ -146,6 +146,19 @@ final class MapView extends Region {
         }
     }
 
+    /**
+     * The view painted on an off-screen canvas with a renderer of its own: the chart and the
+     * visible layers, without the range tool (FX thread).
+     *
+     * @return the picture
+     */
+    javafx.scene.image.WritableImage renderToImage() {
+        Canvas off = new Canvas(viewport.widthPx(), viewport.heightPx());
+        new ChartRenderer().render(off.getGraphicsContext2D(), viewport, model.paletteProperty().get(),
+                model.paintingOrder(), e -> shell.notify(Severity.ERROR, "A layer failed to paint: " + e.getMessage()));
+        return off.snapshot(null, null);
+    }
+
     private void paint() {
         List<RenderLayer> layers = new ArrayList<>(model.paintingOrder());
         layers.add(this::paintRangeTool);

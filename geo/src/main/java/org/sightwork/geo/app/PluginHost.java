@@ -181,6 +181,11 @@ final class PluginHost {
         }
 
         @Override
+        public javafx.scene.image.WritableImage renderChart() {
+            return shell.renderChart();
+        }
+
+        @Override
         public boolean isHeadless() {
             return shell.isHeadless();
         }

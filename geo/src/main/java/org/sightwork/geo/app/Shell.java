@@ -1,6 +1,7 @@
 package org.sightwork.geo.app;
 
 import javafx.scene.Node;
+import javafx.scene.image.WritableImage;
 import org.sightwork.geo.spi.Severity;
 
 /**
@@ -27,4 +28,7 @@ interface Shell {
     void requestRepaint();
 
     void showArea(double southDeg, double westDeg, double northDeg, double eastDeg);
+
+    /** The chart view painted off-screen (see {@link org.sightwork.geo.spi.PluginContext#renderChart}). */
+    WritableImage renderChart();
 }

@@ -6,6 +6,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.function.Consumer;
 import javafx.beans.property.ObjectProperty;
 import javafx.scene.Node;
+import javafx.scene.image.WritableImage;
 import org.sightwork.geo.earth.GeoPosition;
 
 /**
@@ -97,6 +98,17 @@ public interface PluginContext {
      * @param eastDeg east edge (degrees; may be less than west across the antimeridian)
      */
     void showArea(double southDeg, double westDeg, double northDeg, double eastDeg);
+
+    /**
+     * Paints the chart view as it is now (chart layers, graticule, visible overlays and the scale
+     * bar; not the panels, menus, notifications or the range tool) with the same renderer as the
+     * screen and {@code sightwork chart}, on an off-screen canvas the size of the view, and returns
+     * the picture: for a "chart as PNG" export. Headless, the view is the one last rendered, or the
+     * area last asked for with {@link #showArea} at 1200 x 800 pixels.
+     *
+     * @return the picture (JavaFX application thread only)
+     */
+    WritableImage renderChart();
 
     /**
      * Whether the shell is rendering headless ({@code sightwork chart}).

@@ -20,12 +20,15 @@ import java.util.Map;
 public record Session(int formatVersion, String name, List<SessionSight> sights, List<DrLeg> drLegs, String gpsTrack,
         List<SessionFix> fixes, Map<String, String> settings) {
 
-    /** Copies the lists, empty for null. */
+    /** Copies the lists and the settings (sorted by key), empty for null. */
     public Session {
         sights = sights == null ? List.of() : List.copyOf(sights);
         drLegs = drLegs == null ? List.of() : List.copyOf(drLegs);
         fixes = fixes == null ? List.of() : List.copyOf(fixes);
-        settings = settings == null ? Map.of() : Map.copyOf(settings);
+        // Sorted by key, so that a file is written in the same order in every run (Map.copyOf's
+        // iteration order changes from one JVM run to the next); copyOf still rejects nulls.
+        settings = settings == null ? Map.of()
+                : java.util.Collections.unmodifiableSortedMap(new java.util.TreeMap<>(Map.copyOf(settings)));
         name = name == null ? "" : name;
     }
 

@@ -50,8 +50,8 @@ public final class CelestialPlugin implements ChartPlugin {
     static final double AUTOSAVE_SECONDS = 60;
     /** The demo resources, beside this class. */
     static final String DEMO = "/org/sightwork/celestial/demo/";
-    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps-clean.nmea",
-            "demo-sights.csv");
+    static final List<String> DEMO_FILES = List.of("demo-passage.json", "demo-gps.nmea", "demo-dr.csv",
+            "demo-sights.csv", "README.md");
 
     private PluginContext ctx;
     private PassageModel model;
@@ -60,6 +60,7 @@ public final class CelestialPlugin implements ChartPlugin {
     private ResultsPanel worksheet;
     private RecentFiles recent;
     private Timeline autosave;
+    private SkyPanel sky;
     private final List<Overlay> overlays = new ArrayList<>();
 
     /** The no-argument constructor ServiceLoader needs. */
@@ -107,6 +108,8 @@ public final class CelestialPlugin implements ChartPlugin {
             ctx.addPanel("Sight worksheet", scroll(worksheet));
             ctx.addPanel("Fix", scroll(new FixPanel(model)));
             ctx.addPanel("Passage", new PassagePanel(model, ctx.passageTime()));
+            sky = new SkyPanel(model, ctx.passageTime());
+            ctx.addPanel("Sky", sky);
             ctx.addChartClickListener(at -> {
                 switch (log.clickMode()) {
                     case PICK_DR -> log.picked(SightColumn.DR, at);
@@ -252,10 +255,13 @@ public final class CelestialPlugin implements ChartPlugin {
         fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(what, pattern));
         fc.setInitialFileName(model.passage().title().replaceAll("[^A-Za-z0-9._-]+", "-") + pattern.substring(1));
         var f = fc.showSaveDialog(window());
-        if (f == null) {
-            return;
+        if (f != null) {
+            exportTo(what, f.toPath(), work);
         }
-        Path target = f.toPath();
+    }
+
+    /** Writes an export on a worker thread and says where (FX thread). */
+    private void exportTo(String what, Path target, FileWork work) {
         ctx.runInBackground("Exporting " + what, progress -> {
             work.write(target);
             return target;
@@ -263,12 +269,19 @@ public final class CelestialPlugin implements ChartPlugin {
     }
 
     private void exportPng() {
-        if (log.getScene() == null) {
-            return;
-        }
-        // The chart view as it is on the screen: the window's picture (chart, overlays and panels).
-        WritableImage img = log.getScene().snapshot(null);
+        // The chart view as it is now, painted by the shell's renderer (no panels or menus).
+        WritableImage img = ctx.renderChart();
         export("PNG", "*.png", f -> PngExport.write(img, f));
+    }
+
+    /**
+     * Writes the chart view as it is now to a PNG file, without asking for the file (FX thread).
+     *
+     * @param target the file
+     */
+    void exportChartPng(Path target) {
+        WritableImage img = ctx.renderChart();
+        exportTo("PNG", target, f -> PngExport.write(img, f));
     }
 
     private void openDialog() {
@@ -313,9 +326,15 @@ public final class CelestialPlugin implements ChartPlugin {
         FileChooser fc = new FileChooser();
         fc.setTitle("Save passage as");
         fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Sightwork passage", "*.json"));
+        fc.setInitialFileName(model.passage().title().replaceAll("[^A-Za-z0-9._-]+", "-") + ".json");
         var f = fc.showSaveDialog(window());
         if (f != null) {
-            saveTo(f.toPath(), true);
+            Path p = f.toPath();
+            // A name typed without an extension gets the passage extension, so that Open finds it.
+            if (!p.getFileName().toString().contains(".")) {
+                p = p.resolveSibling(p.getFileName() + ".json");
+            }
+            saveTo(p, true);
         }
     }
 
@@ -328,6 +347,7 @@ public final class CelestialPlugin implements ChartPlugin {
     void saveTo(Path file, boolean tell) {
         Passage snapshot = model.passage().copy();
         Plot plot = model.plot().get();
+        boolean existed = java.nio.file.Files.exists(file);
         ctx.runInBackground("Saving passage", progress -> {
             PassageFiles.save(snapshot, plot, file);
             return file;
@@ -341,7 +361,8 @@ public final class CelestialPlugin implements ChartPlugin {
                 ctx.notify(Severity.WARNING, "The recent-files list could not be written: " + e.getMessage());
             }
             if (tell) {
-                ctx.notify(Severity.INFO, "Passage saved: " + f + " (previous version kept as .bak)");
+                ctx.notify(Severity.INFO, "Passage saved: " + f + (existed ? " (previous version kept as "
+                        + org.sightwork.celestial.io.SessionFile.backupOf(f).getFileName() + ")" : ""));
             }
         }, Platform::runLater);
     }
@@ -383,6 +404,9 @@ public final class CelestialPlugin implements ChartPlugin {
     public void stop() {
         if (autosave != null) {
             autosave.stop();
+        }
+        if (sky != null) {
+            sky.stop();
         }
     }
 }

@@ -70,8 +70,40 @@ final class PassageFiles {
         return new Opened(Optional.of(p), o.readOnly(), String.join("; ", notes));
     }
 
+    /**
+     * Saves a passage ({@link SessionFile#save}: temporary file, then rename; the previous file kept
+     * as {@code .bak}), then removes temporary files of the same passage left by a save that was cut
+     * off (a crash or a kill) and that are older than {@link #STALE_TEMP_SECONDS}: a save takes
+     * milliseconds, so such a file belongs to no running writer. Opening never reads them.
+     *
+     * @param p the passage
+     * @param plot its plot (the fixes are written for other readers of the file)
+     * @param file the file
+     * @throws IOException if it cannot be written; the old file is then unchanged
+     */
     static void save(Passage p, Plot plot, Path file) throws IOException {
         SessionFile.save(toSession(p, plot, file.toAbsolutePath().getParent()), file);
+        removeStaleTemps(file);
+    }
+
+    /** Age (seconds) after which a temporary file of a passage is a leftover of a cut-off save. */
+    static final long STALE_TEMP_SECONDS = 60;
+
+    private static void removeStaleTemps(Path file) {
+        Path dir = file.toAbsolutePath().getParent();
+        String prefix = "." + file.getFileName() + ".";
+        java.time.Instant cutoff = java.time.Instant.now().minusSeconds(STALE_TEMP_SECONDS);
+        try (var list = java.nio.file.Files.list(dir)) {
+            for (Path t : (Iterable<Path>) list::iterator) {
+                String n = t.getFileName().toString();
+                if (n.startsWith(prefix) && n.endsWith(".tmp")
+                        && java.nio.file.Files.getLastModifiedTime(t).toInstant().isBefore(cutoff)) {
+                    java.nio.file.Files.deleteIfExists(t);
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // tidying only: a leftover that cannot be removed now is removed by a later save
+        }
     }
 
     static Session toSession(Passage p, Plot plot, Path folder) {

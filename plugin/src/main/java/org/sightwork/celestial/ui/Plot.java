@@ -73,18 +73,21 @@ record Plot(List<SightResult> sights, List<FixResult> fixes, List<TimedPosition>
      * @param rows the rows that went into it
      * @param fix the fix, when there was one
      * @param problem why there was none
-     * @param advanced the lines carried along the DR to the fix time (running fix)
+     * @param advanced the lines carried along the DR to the fix time
+     * @param running whether it is a running fix: its sights span more than
+     *     {@link PlotComputer#ROUND_MINUTES} minutes (a round of star sights a few minutes apart is
+     *     a fix, its lines carried to a common time)
      */
     record FixResult(String name, List<Integer> rows, Optional<Fix> fix, Optional<String> problem,
-            List<AdvancedLine> advanced) {
+            List<AdvancedLine> advanced, boolean running) {
         FixResult {
             rows = List.copyOf(rows);
             advanced = List.copyOf(advanced);
         }
 
-        /** @return whether lines from different times went into it */
+        /** @return whether it is a running fix (sights hours apart, not one round) */
         boolean isRunning() {
-            return !advanced.isEmpty();
+            return running;
         }
     }
 

@@ -42,6 +42,12 @@ import org.sightwork.geo.track.DrLog;
  */
 final class PlotComputer {
 
+    /**
+     * Longest span (minutes) of one round of sights taken as one fix rather than a running fix:
+     * a twilight round of stars takes some 10 to 20 minutes (common practice).
+     */
+    static final int ROUND_MINUTES = 30;
+
     /** DR track sampling (minutes): fine enough that a leg change is drawn where it happens. */
     static final int DR_STEP_MINUTES = 10;
 
@@ -155,10 +161,16 @@ final class PlotComputer {
                     advanced.add(new Plot.AdvancedLine(rows.get(i), fix.utc(), moved, l.znDeg(), lr.distanceRunNm()));
                 }
             }
-            return new Plot.FixResult(name, rows, Optional.of(fix), Optional.empty(), advanced);
+            return new Plot.FixResult(name, rows, Optional.of(fix), Optional.empty(), advanced, isRunning(first, fixTime));
         } catch (FixGeometryException | IllegalArgumentException e) {
-            return new Plot.FixResult(name, rows, Optional.empty(), Optional.of(e.getMessage()), List.of());
+            return new Plot.FixResult(name, rows, Optional.empty(), Optional.of(e.getMessage()), List.of(),
+                    isRunning(first, fixTime));
         }
+    }
+
+    /** @return true (running) when the span exceeds one round */
+    private static boolean isRunning(Instant first, Instant last) {
+        return Duration.between(first, last).toMinutes() > ROUND_MINUTES;
     }
 
     private static List<Plot.SetDrift> setDrifts(List<Plot.FixResult> fixes, Optional<DrLog> log) {

@@ -5,7 +5,9 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Supplier;
@@ -14,11 +16,13 @@ import org.sightwork.celestial.reduction.CircleOfEqualAltitude;
 import org.sightwork.celestial.reduction.LineOfPosition;
 import org.sightwork.celestial.reduction.ReducedSight;
 import org.sightwork.celestial.reduction.SightReduction;
+import org.sightwork.geo.earth.Earth;
 import org.sightwork.geo.earth.GeoPosition;
 import org.sightwork.geo.earth.Sailings;
 import org.sightwork.geo.spi.GeoPainter;
 import org.sightwork.geo.spi.MarkerShape;
 import org.sightwork.geo.spi.Stroke;
+import javafx.scene.paint.Color;
 import org.sightwork.geo.track.Track;
 
 /**
@@ -30,6 +34,10 @@ import org.sightwork.geo.track.Track;
  * construction through its carried intercept point, dashed. A circle of equal altitude is drawn
  * exactly (the painter's small circle about the body's geographical position, radius = zenith
  * distance 90° - Ho in minutes of arc = nm), automatically above {@link #AUTO_CIRCLE_HO_DEG}.
+ *
+ * <p>Labels: placed together by {@link LabelLayout} so that they do not cover each other or the
+ * fix marks (worked out again when the plot, the cursor, the selection or the scale changes);
+ * lines carried within one round of sights (a fix, not a running fix) are drawn unlabelled.
  *
  * <p>Time: when the passage-time cursor is set, only the lines of the
  * {@link #LINE_VALID_HOURS} hours up to the cursor and the fixes up to it are drawn.
@@ -56,6 +64,19 @@ final class PlotOverlays {
     private final Supplier<Integer> selectedRow;
     private final Supplier<Instant> cursor;
     private double lastPixelsPerNm = Double.NaN;
+    private Plot layoutPlot;
+    private List<Object> layoutKey;
+    private Map<String, LabelLayout.Place> layout = Map.of();
+    private final Map<String, String> layoutText = new HashMap<>();
+
+    /**
+     * A label as placed.
+     *
+     * @param place where
+     * @param text what
+     */
+    record PlacedLabel(LabelLayout.Place place, String text) {
+    }
 
     PlotOverlays(Supplier<Plot> plot, Supplier<Integer> selectedRow, Supplier<Instant> cursor) {
         this.plot = plot;
@@ -110,14 +131,14 @@ final class PlotOverlays {
                 double halfNm = 5.0 / p.pixelsPerNm(tp.position().latDeg());
                 p.rhumbLine(Sailings.rhumbDestination(tp.position(), (course + 90) % 360, halfNm),
                         Sailings.rhumbDestination(tp.position(), (course + 270) % 360, halfNm), PlotStyle.DR_TICK);
-                p.label(tp.position(), HH.format(tp.utc()), PlotStyle.DR, 5, 3);
+                label(p, "drh:" + tp.utc().getEpochSecond(), HH.format(tp.utc()), PlotStyle.DR);
             }
         }
         Instant c = cursor.get();
         if (c != null) {
             drAt(c).ifPresent(pos -> {
                 p.marker(pos, MarkerShape.TRIANGLE, 14, Stroke.solid(PlotStyle.DR, 1.5), PlotStyle.DR);
-                p.label(pos, "DR " + HHMM.format(c), PlotStyle.DR, 9, -18);
+                label(p, "drcursor", drCursorLabel(c), PlotStyle.DR);
             });
         }
     }
@@ -177,7 +198,7 @@ final class PlotOverlays {
             boolean selected = sel != null && sel == s.row();
             List<GeoPosition> ends = lopEnds(l.interceptPoint(), l.znDeg());
             p.greatCircle(ends.get(0), ends.get(1), selected ? PlotStyle.LOP_SELECTED : PlotStyle.LOP_LINE);
-            p.label(ends.get(0), lopLabel(l), selected ? PlotStyle.SELECTED : PlotStyle.LOP, 4, 2);
+            label(p, "lop:" + s.row(), lopLabel(l), selected ? PlotStyle.SELECTED : PlotStyle.LOP);
         }
     }
 
@@ -191,9 +212,10 @@ final class PlotOverlays {
                 boolean selected = sel != null && sel == a.row();
                 List<GeoPosition> ends = lopEnds(a.interceptPoint(), a.znDeg());
                 p.greatCircle(ends.get(0), ends.get(1), selected ? PlotStyle.ADVANCED_SELECTED : PlotStyle.ADVANCED_LINE);
-                String what = plot.get().sights().get(a.row()).label();
-                p.label(ends.get(1), String.format(Locale.ROOT, "%s run %.1f nm", what, a.runNm()),
-                        selected ? PlotStyle.SELECTED : PlotStyle.LOP, 4, 16);
+                if (f.isRunning()) {
+                    label(p, "adv:" + f.name() + ":" + a.row(), advancedLabel(plot.get(), a),
+                            selected ? PlotStyle.SELECTED : PlotStyle.LOP);
+                }
             }
         }
     }
@@ -225,7 +247,7 @@ final class PlotOverlays {
             GeoPosition gp = SightReduction.geographicalPosition(r.lop().ghaDeg(), r.lop().decDeg());
             p.marker(gp, MarkerShape.CIRCLE, 11, Stroke.solid(PlotStyle.GP, 2), null);
             p.marker(gp, MarkerShape.DOT, 4, null, PlotStyle.GP);
-            p.label(gp, "GP " + r.lop().label(), PlotStyle.GP, 8, 4);
+            label(p, "gp:" + s.row(), "GP " + r.lop().label(), PlotStyle.GP);
         }
     }
 
@@ -247,13 +269,14 @@ final class PlotOverlays {
                     Stroke.solid(PlotStyle.FIX, 1.4), PlotStyle.ELLIPSE_FILL);
             p.marker(x.position(), MarkerShape.CIRCLE, 13, PlotStyle.FIX_LINE, null);
             p.marker(x.position(), MarkerShape.DOT, 4, null, PlotStyle.FIX);
-            p.label(x.position(), (f.isRunning() ? "RFix " : "Fix ") + HHMM.format(x.utc()) + " " + f.name(),
-                    PlotStyle.FIX, 10, 6);
+            label(p, "fix:" + f.name(), fixLabel(f, x), PlotStyle.FIX);
         }
     }
 
     void paintSetDrift(GeoPainter p) {
-        for (Plot.SetDrift sd : plot.get().setDrifts()) {
+        List<Plot.SetDrift> all = plot.get().setDrifts();
+        for (int i = 0; i < all.size(); i++) {
+            Plot.SetDrift sd = all.get(i);
             if (!fixShown(sd.to())) {
                 continue;
             }
@@ -266,9 +289,141 @@ final class PlotOverlays {
                         headNm), PlotStyle.SET_DRIFT_LINE);
             }
             p.marker(sd.drAtTo(), MarkerShape.CROSS, 9, Stroke.solid(PlotStyle.SET_DRIFT, 1.5), null);
-            p.label(sd.drAtTo(), String.format(Locale.ROOT, "set %03.0f° drift %.1f kn", sd.setDeg(), sd.driftKn()),
-                    PlotStyle.SET_DRIFT, 6, 6);
+            label(p, "sd:" + i, setDriftLabel(sd), PlotStyle.SET_DRIFT);
         }
+    }
+
+    /** @return the labels placed at the last frame (for tests) */
+    List<PlacedLabel> placedLabels() {
+        List<PlacedLabel> out = new ArrayList<>();
+        layout.forEach((k, v) -> out.add(new PlacedLabel(v, layoutText.get(k))));
+        return out;
+    }
+
+    /** Paints a label at its place, if it has one. */
+    private void label(GeoPainter p, String key, String text, Color colour) {
+        double mpp = Earth.NAUTICAL_MILE_M / p.pixelsPerNm(0.0);
+        List<Object> k = List.of(String.valueOf(cursor.get()), String.valueOf(selectedRow.get()), mpp);
+        Plot now = plot.get();
+        if (now != layoutPlot || !k.equals(layoutKey)) {
+            layoutPlot = now;
+            layoutKey = k;
+            layoutText.clear();
+            List<LabelLayout.Request> req = requests(now, p);
+            req.forEach(r -> layoutText.put(r.key(), r.text()));
+            layout = LabelLayout.place(req, obstacles(now), mpp);
+        }
+        LabelLayout.Place at = layout.get(key);
+        if (at != null) {
+            p.label(at.at(), text, colour, at.dxPx(), at.dyPx());
+        }
+    }
+
+    private static List<LabelLayout.Place> around(GeoPosition at, double dx, double dy, double w) {
+        return List.of(new LabelLayout.Place(at, dx, dy), new LabelLayout.Place(at, dx, -dy - 16),
+                new LabelLayout.Place(at, -w - dx, dy), new LabelLayout.Place(at, -w - dx, -dy - 16));
+    }
+
+    /** Places along a drawn line, from the given end (its labelled end) inward, each with four offsets. */
+    private static List<LabelLayout.Place> alongLine(GeoPosition intercept, double znDeg, boolean firstEnd, double w) {
+        List<LabelLayout.Place> out = new ArrayList<>();
+        double sign = firstEnd ? 1 : -1;
+        for (double d : new double[] {LOP_HALF_LENGTH_NM, -LOP_HALF_LENGTH_NM, 10, -10, 6, -6}) {
+            double along = sign * d; // nm toward the first end (Zn + 90°)
+            GeoPosition at = along >= 0 ? Sailings.greatCircleDestination(intercept, (znDeg + 90.0) % 360.0, along)
+                    : Sailings.greatCircleDestination(intercept, (znDeg + 270.0) % 360.0, -along);
+            out.add(new LabelLayout.Place(at, 4, 2));
+            out.add(new LabelLayout.Place(at, 4, -18));
+            out.add(new LabelLayout.Place(at, -w - 4, 2));
+            out.add(new LabelLayout.Place(at, -w - 4, -18));
+        }
+        return out;
+    }
+
+    private List<LabelLayout.Place> obstacles(Plot pl) {
+        List<LabelLayout.Place> out = new ArrayList<>();
+        for (Plot.FixResult f : pl.fixes()) {
+            f.fix().filter(x -> fixShown(x.utc())).ifPresent(x -> out.add(new LabelLayout.Place(x.position(), 9, 0)));
+        }
+        Instant c = cursor.get();
+        if (c != null) {
+            drAt(c).ifPresent(pos -> out.add(new LabelLayout.Place(pos, 9, 0)));
+        }
+        return out;
+    }
+
+    private List<LabelLayout.Request> requests(Plot pl, GeoPainter p) {
+        List<LabelLayout.Request> out = new ArrayList<>();
+        Integer sel = selectedRow.get();
+        for (Plot.FixResult f : pl.fixes()) {
+            if (f.fix().isEmpty() || !fixShown(f.fix().get().utc())) {
+                continue;
+            }
+            Fix x = f.fix().get();
+            String t = fixLabel(f, x);
+            out.add(new LabelLayout.Request("fix:" + f.name(), t, 0, around(x.position(), 10, 6, LabelLayout.widthPx(t))));
+            if (f.isRunning()) {
+                for (Plot.AdvancedLine a : f.advanced()) {
+                    String at = advancedLabel(pl, a);
+                    boolean selected = sel != null && sel == a.row();
+                    out.add(new LabelLayout.Request("adv:" + f.name() + ":" + a.row(), at, selected ? 1.6 : 4,
+                            alongLine(a.interceptPoint(), a.znDeg(), false, LabelLayout.widthPx(at))));
+                }
+            }
+        }
+        Instant c = cursor.get();
+        if (c != null) {
+            drAt(c).ifPresent(pos -> {
+                String t = drCursorLabel(c);
+                out.add(new LabelLayout.Request("drcursor", t, 1, List.of(new LabelLayout.Place(pos, 9, -18),
+                        new LabelLayout.Place(pos, 9, 4), new LabelLayout.Place(pos, -LabelLayout.widthPx(t) - 9, -18),
+                        new LabelLayout.Place(pos, -LabelLayout.widthPx(t) - 9, 4))));
+            });
+        }
+        List<Plot.SetDrift> sds = pl.setDrifts();
+        for (int i = 0; i < sds.size(); i++) {
+            if (fixShown(sds.get(i).to())) {
+                String t = setDriftLabel(sds.get(i));
+                out.add(new LabelLayout.Request("sd:" + i, t, 2, around(sds.get(i).drAtTo(), 6, 6, LabelLayout.widthPx(t))));
+            }
+        }
+        for (Plot.SightResult s : pl.sights()) {
+            if (s.reduced().isEmpty() || !lineShown(s.reduced().get().lop().utc())) {
+                continue;
+            }
+            LineOfPosition l = s.reduced().get().lop();
+            String t = lopLabel(l);
+            boolean selected = sel != null && sel == s.row();
+            out.add(new LabelLayout.Request("lop:" + s.row(), t, selected ? 1.5 : 3,
+                    alongLine(l.interceptPoint(), l.znDeg(), true, LabelLayout.widthPx(t))));
+            String g = "GP " + l.label();
+            GeoPosition gp = SightReduction.geographicalPosition(l.ghaDeg(), l.decDeg());
+            out.add(new LabelLayout.Request("gp:" + s.row(), g, 5, around(gp, 8, 4, LabelLayout.widthPx(g))));
+        }
+        for (Plot.TimedPosition tp : pl.drTrack()) {
+            if (tp.utc().getEpochSecond() % 3600 == 0) {
+                String t = HH.format(tp.utc());
+                out.add(new LabelLayout.Request("drh:" + tp.utc().getEpochSecond(), t, 6,
+                        around(tp.position(), 5, 3, LabelLayout.widthPx(t))));
+            }
+        }
+        return out;
+    }
+
+    private static String fixLabel(Plot.FixResult f, Fix x) {
+        return (f.isRunning() ? "RFix " : "Fix ") + HHMM.format(x.utc()) + " " + f.name();
+    }
+
+    private static String advancedLabel(Plot pl, Plot.AdvancedLine a) {
+        return String.format(Locale.ROOT, "%s run %.1f nm", pl.sights().get(a.row()).label(), a.runNm());
+    }
+
+    private static String drCursorLabel(Instant c) {
+        return "DR " + HHMM.format(c);
+    }
+
+    private static String setDriftLabel(Plot.SetDrift sd) {
+        return String.format(Locale.ROOT, "set %03.0f° drift %.1f kn", sd.setDeg(), sd.driftKn());
     }
 
     static String lopLabel(LineOfPosition l) {

@@ -26,7 +26,8 @@ final class PlotStyle {
 
     static final Stroke DR_LINE = Stroke.dashed(DR, 1.6, 10, 4);
     static final Stroke DR_TICK = Stroke.solid(DR, 1.6);
-    static final Stroke GPS_LINE = Stroke.solid(GPS, 1.6);
+    // dotted: a GPS track must not read as a line of position when the night palette makes both red
+    static final Stroke GPS_LINE = Stroke.dashed(GPS, 1.8, 2, 3);
     static final Stroke LOP_LINE = Stroke.solid(LOP, 2.0);
     static final Stroke LOP_SELECTED = Stroke.solid(SELECTED, 3.2);
     static final Stroke ADVANCED_LINE = Stroke.dashed(LOP, 2.0, 9, 5);

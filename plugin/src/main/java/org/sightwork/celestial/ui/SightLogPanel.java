@@ -173,8 +173,16 @@ final class SightLogPanel extends VBox {
         model.passage().rows().add(r);
         rows.add(r);
         model.edited();
-        table.getSelectionModel().select(rows.size() - 1);
-        table.edit(rows.size() - 1, table.getColumns().get(0));
+        int i = rows.size() - 1;
+        table.getSelectionModel().select(i);
+        table.scrollTo(i);
+        table.requestFocus();
+        // Start editing the new row's Body cell once the table has laid the row out (an edit asked
+        // for before the cell exists is lost, and the navigator's typing with it).
+        javafx.application.Platform.runLater(() -> {
+            table.layout();
+            table.edit(i, table.getColumns().get(0));
+        });
     }
 
     private void deleteSelected() {

@@ -95,6 +95,11 @@ public final class SkyView extends Canvas {
         draw();
     }
 
+    /** @return the plan shown, or null before the first (FX thread; for tests) */
+    SightPlan plan() {
+        return plan;
+    }
+
     /** The radius of the horizon circle (pixels). */
     double horizonRadius() {
         return Math.min(getWidth(), getHeight()) / 2.0 - 34.0;

@@ -71,12 +71,13 @@ class PassageFilesTest {
         PlotComputer pc = new PlotComputer(SightReducer.standard(), FixOptions.DEFAULTS);
         Passage p = PassageFiles.open(demo(dir)).passage().orElseThrow();
         double before = pc.compute(p).sights().get(0).reduced().orElseThrow().lop().interceptNm();
+        double hsDeg = org.sightwork.geo.earth.Angles.parse(p.rows().get(0).get(SightColumn.HS));
         p.rows().get(0).set(SightColumn.HS, "48 71.0");
         Plot bad = pc.compute(p);
         assertTrue(bad.sights().get(0).read().problems().containsKey(SightColumn.HS), "the Hs cell is marked");
-        p.rows().get(0).set(SightColumn.HS, "48°40.0'");
+        p.rows().get(0).set(SightColumn.HS, org.sightwork.geo.earth.Angles.formatDm(hsDeg + 1.0 / 60.0, 2));
         double after = pc.compute(p).sights().get(0).reduced().orElseThrow().lop().interceptNm();
-        // Hs 48°39.0' -> 48°40.0': Ho rises by 1.0' (all corrections unchanged to 0.01'), so the intercept by 1.0 nm.
+        // Hs up 1.0': Ho rises by 1.0' (all corrections unchanged to 0.01'), so the intercept by 1.0 nm.
         assertEquals(before + 1.0, after, 0.02, "editing Hs moves the line by the change in minutes");
     }
 }
