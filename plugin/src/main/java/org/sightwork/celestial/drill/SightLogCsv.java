@@ -43,7 +43,7 @@ public final class SightLogCsv {
                     .append(String.format(Locale.ROOT, "%03.0f,%.1f,", s.courseDeg(), s.speedKn()))
                     .append(profile.sextantSigmaArcmin() > 0
                             ? String.format(Locale.ROOT, "%.1f", profile.sextantSigmaArcmin()) : "").append(',')
-                    .append(quote("sight " + s.number() + "; " + s.description())).append('\n');
+                    .append(quote("sight " + s.number() + "; " + s.description() + "; fix " + s.session())).append('\n');
         }
         return b.toString();
     }

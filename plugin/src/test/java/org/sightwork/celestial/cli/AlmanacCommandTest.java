@@ -77,17 +77,17 @@ class AlmanacCommandTest {
 
     @Test
     void tableFromAStartForSomeDaysAtAStep() {
-        Run r = run("almanac", "--from", "2026-01-01", "--days", "3", "--step", "30m", "--bodies", "sun,moon", "--format", "csv");
+        CliRun r = run("almanac", "--from", "2026-01-01", "--days", "3", "--step", "30m", "--bodies", "sun,moon", "--format", "csv");
         assertEquals(0, r.code(), r.err());
         String[] lines = r.out().strip().split("\n");
         assertEquals(1 + 3 * 48 * 2, lines.length, "header + 3 days x 48 half hours x 2 bodies");
         assertTrue(lines[1].startsWith("Sun,2026-01-01T00:00:00Z,"), lines[1]);
         assertTrue(lines[lines.length - 1].startsWith("Moon,2026-01-03T23:30:00Z,"), lines[lines.length - 1]);
         // A day of hours is the same table as --day.
-        Run a = run("almanac", "--from", "2026-03-20", "--days", "1", "--bodies", "planets,aries", "--format", "csv");
-        Run b = run("almanac", "--day", "2026-03-20", "--bodies", "planets,aries", "--format", "csv");
+        CliRun a = run("almanac", "--from", "2026-03-20", "--days", "1", "--bodies", "planets,aries", "--format", "csv");
+        CliRun b = run("almanac", "--day", "2026-03-20", "--bodies", "planets,aries", "--format", "csv");
         assertEquals(b.out(), a.out(), "--from D --days 1 (step 1h by default) = --day D");
-        Run j = run("almanac", "--from", "2026-03-20T06:00:00Z", "--days", "1", "--step", "6h", "--bodies", "venus", "--format", "json");
+        CliRun j = run("almanac", "--from", "2026-03-20T06:00:00Z", "--days", "1", "--step", "6h", "--bodies", "venus", "--format", "json");
         assertEquals(0, j.code(), j.err());
         assertTrue(j.out().contains("\"2026-03-21T00:00:00Z\""), j.out());
         assertTrue(!j.out().contains("2026-03-21T06:00:00Z"), "the table ends before start + N days");
@@ -110,7 +110,7 @@ class AlmanacCommandTest {
             String[] args = new String[cases[i].length + 1];
             args[0] = "almanac";
             System.arraycopy(cases[i], 0, args, 1, cases[i].length);
-            Run r = run(args);
+            CliRun r = run(args);
             assertEquals(2, r.code(), String.join(" ", args));
             assertTrue(r.err().contains(expect[i]), String.join(" ", args) + ": " + r.err());
             assertEquals("", r.out(), "nothing on standard output: " + String.join(" ", args));

@@ -177,7 +177,8 @@ class DrillPackTest {
         for (LoggedSight s : p.sights()) {
             String note = rows[s.number()].substring(rows[s.number()].lastIndexOf(',') + 1);
             assertTrue(note.startsWith("sight " + s.number() + "; "), note);
-            String what = note.substring(note.indexOf("; ") + 2);
+            assertTrue(note.endsWith("; fix " + s.session()), "names the fix the sight is for: " + note);
+            String what = note.substring(note.indexOf("; ") + 2, note.lastIndexOf("; fix "));
             if (s.body().name().equals("Sun")) {
                 double offMeridianDeg = Math.abs(s.trueZnDeg() - 180.0); // the demo is in 38°N: noon Sun due south
                 if (offMeridianDeg < 1.0) {

@@ -51,8 +51,12 @@ import org.sightwork.geo.track.ImportResult;
  */
 public final class DrillPassage {
 
-    /** The note the pack writes on each sight: "sight N; SESSION" ({@link SightLogCsv}). */
-    private static final Pattern NOTE = Pattern.compile("sight\\s+(\\d+);\\s*(.*)");
+    /**
+     * The note the pack writes on each sight: "sight N; WHAT IT IS; fix SESSION" ({@link SightLogCsv});
+     * group 2 is the fix the sight belongs to (packs made before the description was added wrote
+     * "sight N; SESSION", which the second alternative reads).
+     */
+    private static final Pattern NOTE = Pattern.compile("sight\\s+(\\d+);(?:.*;\\s*fix\\s+(.*)|\\s*([^;]*))");
     private static final DateTimeFormatter CELL_TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
 
@@ -191,8 +195,9 @@ public final class DrillPassage {
         Map<String, List<Integer>> bySession = new LinkedHashMap<>();
         for (int i = 0; i < log.sights().size(); i++) {
             Matcher m = NOTE.matcher(log.sights().get(i).note().strip());
-            if (m.matches() && !m.group(2).isBlank()) {
-                bySession.computeIfAbsent(m.group(2).strip(), s -> new ArrayList<>()).add(Integer.parseInt(m.group(1)));
+            String session = m.matches() ? (m.group(2) != null ? m.group(2) : m.group(3)) : null;
+            if (session != null && !session.isBlank()) {
+                bySession.computeIfAbsent(session.strip(), s -> new ArrayList<>()).add(Integer.parseInt(m.group(1)));
             }
         }
         bySession.forEach((s, ns) -> {

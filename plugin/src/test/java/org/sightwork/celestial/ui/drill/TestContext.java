@@ -109,4 +109,10 @@ final class TestContext implements PluginContext {
     public Path userDirectory() {
         return userDir;
     }
+
+    /** The drill tests render through the chart itself; no test asks this context for the view. */
+    @Override
+    public javafx.scene.image.WritableImage renderChart() {
+        throw new UnsupportedOperationException("the drill tests render through HeadlessChart directly");
+    }
 }
