@@ -7,7 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.sightwork.geo.track.AtomicFiles;
+import org.sightwork.geo.files.SafeWrite;
 
 /**
  * The list of passages opened lately, newest first, kept in {@code ~/.sightwork/recent.json} as a
@@ -65,6 +65,6 @@ final class RecentFiles {
             }
         }
         Files.createDirectories(file.toAbsolutePath().getParent());
-        AtomicFiles.write(file, out -> JSON.writeValue(out, new Content(now)));
+        SafeWrite.write(file, out -> JSON.writeValue(out, new Content(now)));
     }
 }

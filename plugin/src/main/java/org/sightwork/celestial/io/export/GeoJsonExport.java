@@ -1,5 +1,6 @@
 package org.sightwork.celestial.io.export;
 
+import org.sightwork.geo.files.SafeWrite;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -36,7 +37,7 @@ public final class GeoJsonExport {
      */
     public static void write(PlotExport plot, Path target) throws IOException {
         ObjectNode root = toJson(plot);
-        SafeFileWrite.write(target, tmp -> JSON.writeValue(tmp.toFile(), root));
+        SafeWrite.writeFile(target, SafeWrite.Previous.DISCARD, tmp -> JSON.writeValue(tmp.toFile(), root));
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.io.export;
 
+import org.sightwork.geo.files.SafeWrite;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.sql.SQLException;
@@ -47,7 +48,7 @@ public final class GeoPackageExport {
      * @throws IOException if the file cannot be written; the target is then unchanged
      */
     public static void write(PlotExport plot, Path target) throws IOException {
-        SafeFileWrite.write(target, tmp -> {
+        SafeWrite.writeFile(target, SafeWrite.Previous.DISCARD, tmp -> {
             // The NGA manager insists on the .gpkg extension.
             Path gpkgTmp = tmp.resolveSibling(tmp.getFileName() + ".gpkg");
             try {

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.io.export;
 
+import org.sightwork.geo.files.SafeWrite;
 import io.jenetics.jpx.GPX;
 import io.jenetics.jpx.Route;
 import io.jenetics.jpx.Track;
@@ -31,7 +32,7 @@ public final class GpxExport {
      */
     public static void write(PlotExport plot, Path target) throws IOException {
         GPX gpx = toGpx(plot);
-        SafeFileWrite.write(target, tmp -> GPX.Writer.DEFAULT.write(gpx, tmp));
+        SafeWrite.writeFile(target, SafeWrite.Previous.DISCARD, tmp -> GPX.Writer.DEFAULT.write(gpx, tmp));
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.sightwork.celestial.io.export;
 
+import org.sightwork.geo.files.SafeWrite;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -42,7 +43,7 @@ public final class PdfWorksheetExport {
      * @throws IOException if the file cannot be written; the target is then unchanged
      */
     public static void write(WorksheetReport report, Path target) throws IOException {
-        SafeFileWrite.write(target, tmp -> {
+        SafeWrite.writeFile(target, SafeWrite.Previous.DISCARD, tmp -> {
             try (PDDocument doc = new PDDocument()) {
                 PDDocumentInformation info = doc.getDocumentInformation();
                 info.setTitle(report.title());

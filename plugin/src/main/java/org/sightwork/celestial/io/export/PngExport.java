@@ -1,5 +1,6 @@
 package org.sightwork.celestial.io.export;
 
+import org.sightwork.geo.files.SafeWrite;
 import java.io.IOException;
 import java.nio.file.Path;
 import javafx.embed.swing.SwingFXUtils;
@@ -26,7 +27,7 @@ public final class PngExport {
      */
     public static void write(Image image, Path target) throws IOException {
         var buffered = SwingFXUtils.fromFXImage(image, null);
-        SafeFileWrite.write(target, tmp -> {
+        SafeWrite.writeFile(target, SafeWrite.Previous.DISCARD, tmp -> {
             if (!ImageIO.write(buffered, "png", tmp.toFile())) {
                 throw new IOException("no PNG writer is available in this Java runtime");
             }

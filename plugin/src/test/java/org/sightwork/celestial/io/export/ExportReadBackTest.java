@@ -166,7 +166,7 @@ class ExportReadBackTest {
         Path file = tmp.resolve("plot.gpx");
         Files.writeString(file, "old");
         try {
-            SafeFileWrite.write(file, t -> {
+            org.sightwork.geo.files.SafeWrite.writeFile(file, org.sightwork.geo.files.SafeWrite.Previous.DISCARD, t -> {
                 Files.writeString(t, "half");
                 throw new java.io.IOException("disk full (injected)");
             });
