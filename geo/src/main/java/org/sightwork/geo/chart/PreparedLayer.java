@@ -25,12 +25,15 @@ import org.sightwork.geo.earth.Mercator;
  * bands. Each band k has a nominal scale of {@link #bandMetresPerPixel(int)} chart metres
  * per pixel and keeps the geometry simplified with the Douglas-Peucker algorithm (JTS
  * {@link DouglasPeuckerSimplifier}, without its validity repair, which is slow and not needed for
- * drawing) to a tolerance of half a pixel at that scale. The renderer picks the coarsest band whose
- * scale is no coarser than the view's, so the simplification never exceeds half a pixel on the
- * screen; the last band is the source at full resolution. Douglas-Peucker rather than JTS's
- * topology-preserving simplifier because it prepares the full-resolution data several times faster
- * and its rare ring crossings are invisible below half a pixel. Every ring and line becomes a
- * {@link Part}: a packed array of coordinates with its envelope, the unit the index returns.
+ * drawing) to a tolerance of {@link #bandTolerancePx(int)} pixels at that scale: 1.5 px at the
+ * overview bands (the world to an ocean), half a pixel from the coastal bands down. The renderer
+ * picks the coarsest band whose scale is no coarser than the view's, so the simplification never
+ * exceeds that on the screen; the last band is the source at full resolution. Douglas-Peucker rather
+ * than JTS's topology-preserving simplifier because it prepares the full-resolution data several
+ * times faster and its rare ring crossings are invisible at a pixel or so. Every ring and line
+ * becomes a {@link Part}: a packed array of coordinates with its envelope, the unit the index
+ * returns; a feature the simplification left unchanged shares its parts with the finer band.
+ * {@link PreparedCache} keeps every band of a file for its next opening.
  *
  * <p><b>Limits:</b> a polygon ring is one part however large; very large rings (a continent at full
  * resolution) should be tiled in the data, as the bundled world base is.
@@ -44,7 +47,7 @@ public final class PreparedLayer {
     private static final double COARSEST_M_PER_PX = 20_000.0;
     /** Each band is this many times finer than the one before. */
     private static final double BAND_RATIO = 4.0;
-    /** Fraction of the half-pixel tolerance used at each step of the cascade (see {@link #generalise()}). */
+    /** Fraction of a band's tolerance used at each step of the cascade (see {@link #generalise()}). */
     private static final double CASCADE_FRACTION = 0.75;
     /** Number of simplified bands; one more band holds the full resolution. */
     private static final int SIMPLIFIED_BANDS = 7;
@@ -176,9 +179,10 @@ public final class PreparedLayer {
     /**
      * Generalises the layer for every coarser band, finest first, each band simplified from the one
      * below it (a cascade: each step removes fewer vertices from fewer, so all bands cost about 1.3
-     * full-resolution passes). The cascade's tolerances are 3/4 of the band's half pixel, so the
-     * accumulated deviation, at most 3/4 (1 + 1/4 + 1/16 + ...) = 1 times the half pixel, stays within
-     * half a pixel. Until a band is ready, {@link #query} draws from the nearest finer band that is:
+     * full-resolution passes). The cascade's tolerances are 3/4 of the band's own, and a finer band's
+     * tolerance in metres is at most 1/4 of the next coarser one's, so the accumulated deviation, at
+     * most 3/4 (1 + 1/4 + 1/16 + ...) = 1 times the band's tolerance, stays within it. Until a band is
+     * ready, {@link #query} draws from the nearest finer band that is:
      * correct, only slower. Slow: call from a worker thread; idempotent.
      */
     public synchronized void generalise() {
