@@ -205,9 +205,9 @@ public final class RenderBenchmark {
             Arrays.sort(procCpu);
             int p95 = (int) Math.ceil(frames * 0.95) - 1;
             System.out.printf(Locale.ROOT, "%-26s band %d  wall median %6.2f p95 %6.2f ms | cpu median %6.2f p95 %6.2f ms"
-                    + " (FX thread median %5.2f) | process cpu median %6.2f | vertices drawn %d%n", z[0],
+                    + " (FX thread median %5.2f) | process cpu mean %6.2f | vertices drawn %d%n", z[0],
                     PreparedLayer.bandFor(base.metresPerPx()), ms[frames / 2], ms[p95], cpu[frames / 2], cpu[p95],
-                    fxCpu[frames / 2], procCpu[frames / 2], drawn[0] / frames);
+                    fxCpu[frames / 2], Arrays.stream(procCpu).sum() / frames, drawn[0] / frames);
         }
         double[] a = all.stream().mapToDouble(Double::doubleValue).sorted().toArray();
         double[] c = allCpu.stream().mapToDouble(Double::doubleValue).sorted().toArray();
