@@ -52,7 +52,8 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
      */
     public static ChartSet load(List<Path> files, boolean maskByDetail, DoubleConsumer progress) {
         int nf = files.size();
-        // The most detailed file first: a coarser file's mask is the extent of the next finer one.
+        // The most detailed file first: every coarser file's mask is the extent of the last file that
+        // gave data.
         List<List<PreparedLayer>> byFile = new ArrayList<>();
         List<Envelope> extents = new ArrayList<>();
         List<ChartProblem> problems = new ArrayList<>();
@@ -74,7 +75,7 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
             Envelope e = new Envelope();
             layers.forEach(l -> e.expandToInclude(l.layer().extentDeg()));
             extents.set(i, e);
-            if (!e.isNull()) {
+            if (!e.isNull() && finer == null) {
                 finer = e;
             }
         }
