@@ -42,7 +42,7 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
     }
 
     /**
-     * Reads and prepares chart files; a file that {@link PreparedCache} holds, unchanged, is read back
+     * Reads and prepares chart files; a file that {@code PreparedCache} holds, unchanged, is read back
      * from it already generalised. Slow: call from a worker thread.
      *
      * @param files the files, least detailed first
@@ -94,7 +94,7 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
     }
 
     /**
-     * One file's layers, prepared: from {@link PreparedCache} when it holds them for the file as it
+     * One file's layers, prepared: from {@code PreparedCache} when it holds them for the file as it
      * is, else read and prepared (full resolution only; {@link #generalise} does the rest).
      */
     private static List<PreparedLayer> readPrepared(Path file, Envelope maskDeg, List<ChartProblem> problems,
@@ -151,7 +151,7 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
     /**
      * Generalises every layer for the coarser zoom bands ({@link PreparedLayer#generalise()}). Slow:
      * call from a worker thread after the first frame; drawing goes on meanwhile. Then keeps each file
-     * read without a problem in {@link PreparedCache} for the next opening.
+     * read without a problem in {@code PreparedCache} for the next opening.
      *
      * @param progress receives the fraction done, [0, 1]
      */

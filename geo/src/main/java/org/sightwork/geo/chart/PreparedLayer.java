@@ -33,7 +33,7 @@ import org.sightwork.geo.earth.Mercator;
  * times faster and its rare ring crossings are invisible at a pixel or so. Every ring and line
  * becomes a {@link Part}: a packed array of coordinates with its envelope, the unit the index
  * returns; a feature the simplification left unchanged shares its parts with the finer band.
- * {@link PreparedCache} keeps every band of a file for its next opening.
+ * {@code PreparedCache} keeps every band of a file for its next opening.
  *
  * <p><b>Limits:</b> a polygon ring is one part however large; very large rings (a continent at full
  * resolution) should be tiled in the data, as the bundled world base is.
@@ -115,7 +115,7 @@ public final class PreparedLayer {
     }
 
     /**
-     * A layer prepared before and read back from {@link PreparedCache}: every band given.
+     * A layer prepared before and read back from {@code PreparedCache}: every band given.
      *
      * @param layer the layer (its features need not be kept)
      * @param extentM the extent (metres)
@@ -273,7 +273,7 @@ public final class PreparedLayer {
     }
 
     /**
-     * The parts of a band, for {@link PreparedCache}.
+     * The parts of a band, for {@code PreparedCache}.
      *
      * @param band the band
      * @return the parts (unmodifiable), or null if the band is not ready
@@ -292,7 +292,7 @@ public final class PreparedLayer {
     }
 
     /**
-     * Whether the layer was read back prepared from {@link PreparedCache} rather than prepared here.
+     * Whether the layer was read back prepared from {@code PreparedCache} rather than prepared here.
      *
      * @return true if restored
      */
