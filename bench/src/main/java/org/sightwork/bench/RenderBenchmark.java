@@ -29,7 +29,8 @@ import org.sightwork.geo.render.Viewport;
  *
  * <p>Run: {@code java -cp "bench/target/classes:$(cat bench/target/bench-classpath.txt)"
  * -Dsightwork.home=. org.sightwork.bench.RenderBenchmark [frames per zoom] [WxH]}. Prints one line per
- * zoom (median, 95th percentile, vertices drawn) and the totals. See {@code docs/PERFORMANCE.md}.
+ * zoom (median, 95th percentile, vertices drawn) and the totals; with 0 frames, only the opening
+ * (fresh JVM each run). See {@code docs/PERFORMANCE.md}.
  */
 public final class RenderBenchmark {
 
@@ -73,11 +74,32 @@ public final class RenderBenchmark {
         long cpu1 = tmx.getCurrentThreadCpuTime();
         long t1 = System.nanoTime();
         Viewport first = Viewport.fitting(36.8, -29.0, 39.2, -24.6, w, h);
-        HeadlessPlatform.call(() -> new HeadlessChart(detail, Palette.DAY, false).render(first));
+        long[] openFx = new long[2];
+        long[] raster = Thread.getAllStackTraces().keySet().stream()
+                .filter(t -> t.getName().startsWith("QuantumRenderer")).mapToLong(Thread::getId).toArray();
+        long r0 = cpuOf(tmx, raster);
+        HeadlessPlatform.call(() -> {
+            // as the window's first frame: the chart's layers (names and graticule too) painted onto
+            // a canvas of the window's size and rasterised (the snapshot forces it); no image export
+            openFx[0] = tmx.getCurrentThreadCpuTime();
+            HeadlessChart hc = new HeadlessChart(detail, Palette.DAY, false);
+            Canvas c = new Canvas(w, h);
+            new ChartRenderer().render(c.getGraphicsContext2D(), first, Palette.DAY, hc.model().paintingOrder(),
+                    e -> { });
+            c.snapshot(null, null);
+            openFx[1] = tmx.getCurrentThreadCpuTime();
+            hc.close();
+            return null;
+        });
         long t2 = System.nanoTime();
+        long r1 = cpuOf(tmx, raster);
         System.out.printf(Locale.ROOT, "open bundled chart to first frame: read+prepare detail %.0f ms (cpu %.0f ms),"
-                + " first frame %.0f ms, total %.0f ms%n", (t1 - t0) / 1e6, (cpu1 - cpu0) / 1e6, (t2 - t1) / 1e6,
-                (t2 - t0) / 1e6);
+                + " first frame %.0f ms (cpu: FX thread %.0f ms, renderer thread %.0f ms), total %.0f ms (cpu %.0f ms)%n",
+                (t1 - t0) / 1e6, (cpu1 - cpu0) / 1e6, (t2 - t1) / 1e6, (openFx[1] - openFx[0]) / 1e6, (r1 - r0) / 1e6,
+                (t2 - t0) / 1e6, (cpu1 - cpu0 + openFx[1] - openFx[0] + r1 - r0) / 1e6);
+        if (frames == 0) {
+            System.exit(0); // opening only (run it in fresh JVMs to see the spread)
+        }
         long c3 = tmx.getCurrentThreadCpuTime();
         long t3 = System.nanoTime();
         ChartSet world = ChartSet.loadUnder(files.subList(0, files.size() - 1), detail.detailExtentDeg(), f -> { });
@@ -119,21 +141,44 @@ public final class RenderBenchmark {
         List<Double> all = new ArrayList<>();
         List<Double> allCpu = new ArrayList<>();
         java.lang.management.ThreadMXBean tm = java.lang.management.ManagementFactory.getThreadMXBean();
-        long[] renderThreads = Thread.getAllStackTraces().keySet().stream()
-                .filter(t -> t.getName().startsWith("QuantumRenderer") || t.getName().startsWith("JavaFX Application"))
+        long[] fxThread = Thread.getAllStackTraces().keySet().stream()
+                .filter(t -> t.getName().startsWith("JavaFX Application"))
                 .mapToLong(Thread::getId).toArray();
+        long[] rasterThread = Thread.getAllStackTraces().keySet().stream()
+                .filter(t -> t.getName().startsWith("QuantumRenderer"))
+                .mapToLong(Thread::getId).toArray();
+        long[] renderThreads = java.util.stream.LongStream.concat(Arrays.stream(fxThread), Arrays.stream(rasterThread))
+                .toArray();
+        com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         ChartRenderer renderer = new ChartRenderer();
         Canvas canvas = HeadlessPlatform.call(() -> new Canvas(w, h));
         WritableImage img = new WritableImage(w, h);
+        // Warm up over every zoom first (the JIT compiles the rasteriser's and the path code's hot
+        // loops in the first few dozen frames); the figures below are the steady state.
+        for (int i = 0; i < 20; i++) {
+            for (Object[] z : zooms) {
+                Viewport v = ((Viewport) z[1]).panned(5.0 * i, 2.0 * i);
+                HeadlessPlatform.call(() -> {
+                    renderer.render(canvas.getGraphicsContext2D(), v, Palette.DAY, layers, e -> { });
+                    canvas.snapshot(null, img);
+                    return null;
+                });
+            }
+        }
         for (Object[] z : zooms) {
             Viewport base = (Viewport) z[1];
             double[] ms = new double[frames];
             double[] cpu = new double[frames];
+            double[] fxCpu = new double[frames];
+            double[] procCpu = new double[frames];
             long[] drawn = {0};
             for (int i = -5; i < frames; i++) {
                 // pan a little each frame (as when dragging), so nothing is reused from the frame before
                 Viewport v = base.panned(7.0 * (i % 10), 3.0 * (i % 7));
                 long c0 = cpuOf(tm, renderThreads);
+                long f0 = cpuOf(tm, fxThread);
+                long p0 = os.getProcessCpuTime();
                 long s = System.nanoTime();
                 HeadlessPlatform.call(() -> {
                     renderer.render(canvas.getGraphicsContext2D(), v, Palette.DAY, layers, e -> { });
@@ -142,9 +187,13 @@ public final class RenderBenchmark {
                 });
                 long e = System.nanoTime();
                 long c1 = cpuOf(tm, renderThreads);
+                long f1 = cpuOf(tm, fxThread);
+                long p1 = os.getProcessCpuTime();
                 if (i >= 0) {
                     ms[i] = (e - s) / 1e6;
                     cpu[i] = (c1 - c0) / 1e6;
+                    fxCpu[i] = (f1 - f0) / 1e6;
+                    procCpu[i] = (p1 - p0) / 1e6;
                     all.add(ms[i]);
                     allCpu.add(cpu[i]);
                     drawn[0] += vectors.stream().mapToInt(VectorLayerRenderer::lastVertices).sum();
@@ -152,10 +201,13 @@ public final class RenderBenchmark {
             }
             Arrays.sort(ms);
             Arrays.sort(cpu);
+            Arrays.sort(fxCpu);
+            Arrays.sort(procCpu);
+            int p95 = (int) Math.ceil(frames * 0.95) - 1;
             System.out.printf(Locale.ROOT, "%-26s band %d  wall median %6.2f p95 %6.2f ms | cpu median %6.2f p95 %6.2f ms"
-                    + " | vertices drawn %d%n", z[0], PreparedLayer.bandFor(base.metresPerPx()), ms[frames / 2],
-                    ms[(int) Math.ceil(frames * 0.95) - 1], cpu[frames / 2], cpu[(int) Math.ceil(frames * 0.95) - 1],
-                    drawn[0] / frames);
+                    + " (FX thread median %5.2f) | process cpu mean %6.2f | vertices drawn %d%n", z[0],
+                    PreparedLayer.bandFor(base.metresPerPx()), ms[frames / 2], ms[p95], cpu[frames / 2], cpu[p95],
+                    fxCpu[frames / 2], Arrays.stream(procCpu).sum() / frames, drawn[0] / frames);
         }
         double[] a = all.stream().mapToDouble(Double::doubleValue).sorted().toArray();
         double[] c = allCpu.stream().mapToDouble(Double::doubleValue).sorted().toArray();

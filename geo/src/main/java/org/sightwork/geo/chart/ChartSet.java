@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.DoubleConsumer;
 import org.locationtech.jts.geom.Envelope;
 
@@ -41,7 +42,8 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
     }
 
     /**
-     * Reads and prepares chart files. Slow: call from a worker thread.
+     * Reads and prepares chart files; a file that {@code PreparedCache} holds, unchanged, is read back
+     * from it already generalised. Slow: call from a worker thread.
      *
      * @param files the files, least detailed first
      * @param maskByDetail cut each file back where a later file covers the ground
@@ -50,50 +52,68 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
      */
     public static ChartSet load(List<Path> files, boolean maskByDetail, DoubleConsumer progress) {
         int nf = files.size();
-        List<ChartData> read = new ArrayList<>();
+        // The most detailed file first: every coarser file's mask is the extent of the last file that
+        // gave data.
+        List<List<PreparedLayer>> byFile = new ArrayList<>();
+        List<Envelope> extents = new ArrayList<>();
         List<ChartProblem> problems = new ArrayList<>();
         for (int i = 0; i < nf; i++) {
-            int k = i;
-            ChartData d = ChartFiles.read(files.get(i), f -> progress.accept(0.5 * (k + f) / nf));
-            read.add(d);
-            problems.addAll(d.problems());
+            byFile.add(List.of());
+            extents.add(new Envelope());
         }
-        List<Envelope> extents = new ArrayList<>();
-        for (ChartData d : read) {
+        Envelope finer = null;
+        for (int i = nf - 1; i >= 0; i--) {
+            Envelope mask = null;
+            if (maskByDetail && finer != null) {
+                mask = new Envelope(finer);
+                mask.expandBy(MASK_MARGIN_DEG);
+            }
+            int k = nf - 1 - i;
+            List<PreparedLayer> layers = readPrepared(files.get(i), mask, problems,
+                    f -> progress.accept((k + f) / nf));
+            byFile.set(i, layers);
             Envelope e = new Envelope();
-            d.layers().forEach(l -> e.expandToInclude(l.extentDeg()));
-            extents.add(e);
+            layers.forEach(l -> e.expandToInclude(l.layer().extentDeg()));
+            extents.set(i, e);
+            if (!e.isNull() && finer == null) {
+                finer = e;
+            }
         }
         List<PreparedLayer> prepared = new ArrayList<>();
         Envelope all = new Envelope();
         Envelope detail = new Envelope();
-        int total = read.stream().mapToInt(d -> d.layers().size()).sum();
-        int done = 0;
         for (int i = 0; i < nf; i++) {
-            Envelope mask = null;
-            if (maskByDetail) {
-                for (int j = nf - 1; j > i; j--) {
-                    if (!extents.get(j).isNull()) {
-                        mask = new Envelope(extents.get(j));
-                        mask.expandBy(MASK_MARGIN_DEG);
-                        break;
-                    }
-                }
-            }
-            List<ChartLayer> layers = new ArrayList<>(read.get(i).layers());
-            layers.sort(Comparator.comparingInt(l -> drawOrder(l.featureClass())));
-            for (ChartLayer l : layers) {
-                prepared.add(PreparedLayer.prepare(l, mask));
-                all.expandToInclude(l.extentDeg());
-                done++;
-                progress.accept(0.5 + 0.5 * done / Math.max(1, total));
-            }
+            prepared.addAll(byFile.get(i));
+            all.expandToInclude(extents.get(i));
             if (!extents.get(i).isNull()) {
                 detail = extents.get(i);
             }
         }
         progress.accept(1.0);
         return new ChartSet(prepared, problems, all, detail);
+    }
+
+    /**
+     * One file's layers, prepared: from {@code PreparedCache} when it holds them for the file as it
+     * is, else read and prepared (full resolution only; {@link #generalise} does the rest).
+     */
+    private static List<PreparedLayer> readPrepared(Path file, Envelope maskDeg, List<ChartProblem> problems,
+            DoubleConsumer progress) {
+        Optional<List<PreparedLayer>> cached = PreparedCache.read(file, maskDeg);
+        if (cached.isPresent()) {
+            progress.accept(1.0);
+            return cached.get();
+        }
+        ChartData d = ChartFiles.read(file, f -> progress.accept(0.7 * f));
+        problems.addAll(d.problems());
+        List<ChartLayer> layers = new ArrayList<>(d.layers());
+        layers.sort(Comparator.comparingInt(l -> drawOrder(l.featureClass())));
+        List<PreparedLayer> prepared = new ArrayList<>();
+        for (ChartLayer l : layers) {
+            prepared.add(PreparedLayer.prepare(l, maskDeg));
+            progress.accept(0.7 + 0.3 * prepared.size() / layers.size());
+        }
+        return prepared;
     }
 
     /**
@@ -118,13 +138,10 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
         Envelope all = new Envelope();
         for (int i = 0; i < files.size(); i++) {
             int k = i;
-            ChartData d = ChartFiles.read(files.get(i), f -> progress.accept(0.7 * (k + f) / files.size()));
-            problems.addAll(d.problems());
-            List<ChartLayer> layers = new ArrayList<>(d.layers());
-            layers.sort(Comparator.comparingInt(l -> drawOrder(l.featureClass())));
-            for (ChartLayer l : layers) {
-                prepared.add(PreparedLayer.prepare(l, maskDeg));
-                all.expandToInclude(l.extentDeg());
+            for (PreparedLayer l : readPrepared(files.get(i), maskDeg, problems,
+                    f -> progress.accept((k + f) / files.size()))) {
+                prepared.add(l);
+                all.expandToInclude(l.layer().extentDeg());
             }
         }
         progress.accept(1.0);
@@ -133,7 +150,8 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
 
     /**
      * Generalises every layer for the coarser zoom bands ({@link PreparedLayer#generalise()}). Slow:
-     * call from a worker thread after the first frame; drawing goes on meanwhile.
+     * call from a worker thread after the first frame; drawing goes on meanwhile. Then keeps each file
+     * read without a problem in {@code PreparedCache} for the next opening.
      *
      * @param progress receives the fraction done, [0, 1]
      */
@@ -141,6 +159,18 @@ public record ChartSet(List<PreparedLayer> layers, List<ChartProblem> problems, 
         for (int i = 0; i < layers.size(); i++) {
             layers.get(i).generalise();
             progress.accept((i + 1.0) / layers.size());
+        }
+        // Keep what was prepared here for the next opening (files read without a problem only).
+        java.util.Map<Path, List<PreparedLayer>> byFile = new java.util.LinkedHashMap<>();
+        for (PreparedLayer l : layers) {
+            byFile.computeIfAbsent(l.layer().source(), f -> new ArrayList<>()).add(l);
+        }
+        for (var e : byFile.entrySet()) {
+            boolean clean = problems.stream().noneMatch(p -> p.file().equals(e.getKey()));
+            boolean fresh = e.getValue().stream().noneMatch(PreparedLayer::isRestored);
+            if (clean && fresh) {
+                PreparedCache.write(e.getKey(), e.getValue().get(0).maskDeg(), e.getValue());
+            }
         }
     }
 

@@ -132,7 +132,7 @@ public final class GeoJsonSource {
                 && p.get("name") instanceof String code) {
             return Reprojection.fromCode(code);
         }
-        return Reprojection.fromCode("EPSG:4326");
+        return Reprojection.wgs84LonLat(); // RFC 7946 §4: WGS84 longitude, latitude
     }
 
     private static String describe(org.json.simple.parser.ParseException e) {

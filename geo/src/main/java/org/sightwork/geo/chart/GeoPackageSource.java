@@ -191,8 +191,9 @@ public final class GeoPackageSource {
         }
         long id = srs.getSrsId();
         if (id == 0 || id == 4326) {
-            // srs_id 0 is "undefined geographic", which GeoPackage 1.3 §1.1.2.1.1 reads as WGS84 degrees
-            return Reprojection.fromCode("EPSG:4326");
+            // srs_id 0 is "undefined geographic", which GeoPackage 1.3 §1.1.2.1.1 reads as WGS84
+            // degrees; 4326 is WGS84 (GeoPackage 1.3 §1.1.2.1.1 requires that row), stored x = longitude
+            return Reprojection.wgs84LonLat();
         }
         String org = srs.getOrganization();
         if (org != null && !org.isBlank() && !org.equalsIgnoreCase("NONE")) {

@@ -25,12 +25,15 @@ import org.sightwork.geo.earth.Mercator;
  * bands. Each band k has a nominal scale of {@link #bandMetresPerPixel(int)} chart metres
  * per pixel and keeps the geometry simplified with the Douglas-Peucker algorithm (JTS
  * {@link DouglasPeuckerSimplifier}, without its validity repair, which is slow and not needed for
- * drawing) to a tolerance of half a pixel at that scale. The renderer picks the coarsest band whose
- * scale is no coarser than the view's, so the simplification never exceeds half a pixel on the
- * screen; the last band is the source at full resolution. Douglas-Peucker rather than JTS's
- * topology-preserving simplifier because it prepares the full-resolution data several times faster
- * and its rare ring crossings are invisible below half a pixel. Every ring and line becomes a
- * {@link Part}: a packed array of coordinates with its envelope, the unit the index returns.
+ * drawing) to a tolerance of {@link #bandTolerancePx(int)} pixels at that scale: 1.5 px at the
+ * overview bands (the world to an ocean), half a pixel from the coastal bands down. The renderer
+ * picks the coarsest band whose scale is no coarser than the view's, so the simplification never
+ * exceeds that on the screen; the last band is the source at full resolution. Douglas-Peucker rather
+ * than JTS's topology-preserving simplifier because it prepares the full-resolution data several
+ * times faster and its rare ring crossings are invisible at a pixel or so. Every ring and line
+ * becomes a {@link Part}: a packed array of coordinates with its envelope, the unit the index
+ * returns; a feature the simplification left unchanged shares its parts with the finer band.
+ * {@code PreparedCache} keeps every band of a file for its next opening.
  *
  * <p><b>Limits:</b> a polygon ring is one part however large; very large rings (a continent at full
  * resolution) should be tiled in the data, as the bundled world base is.
@@ -44,10 +47,26 @@ public final class PreparedLayer {
     private static final double COARSEST_M_PER_PX = 20_000.0;
     /** Each band is this many times finer than the one before. */
     private static final double BAND_RATIO = 4.0;
-    /** Fraction of the half-pixel tolerance used at each step of the cascade (see {@link #generalise()}). */
+    /** Fraction of a band's tolerance used at each step of the cascade (see {@link #generalise()}). */
     private static final double CASCADE_FRACTION = 0.75;
     /** Number of simplified bands; one more band holds the full resolution. */
     private static final int SIMPLIFIED_BANDS = 7;
+    /**
+     * Bands up to this one are overview scales (1.25 km/px and coarser: the world to an ocean), where
+     * the simplification may reach {@link #OVERVIEW_TOLERANCE_PX}; finer bands keep
+     * {@link #DETAIL_TOLERANCE_PX}.
+     */
+    private static final int LAST_OVERVIEW_BAND = 2;
+    /**
+     * Simplification allowed at the overview bands (pixels at the band's scale). The world base
+     * (Natural Earth 1:10 m) is itself generalised to a few kilometres, and at 0.5 px the world view
+     * still drew its coastline at about one vertex per pixel (35 000 vertices, 21 ms a frame in the
+     * software pipeline); at 1.5 px it draws less than half of them, and a view between this band's
+     * scale and the next coarser one sees 1.5 px to 0.4 px of it.
+     */
+    static final double OVERVIEW_TOLERANCE_PX = 1.5;
+    /** Simplification allowed at the coastal and harbour bands (pixels at the band's scale). */
+    static final double DETAIL_TOLERANCE_PX = 0.5;
 
     /**
      * One ring, line or point, projected.
@@ -77,14 +96,46 @@ public final class PreparedLayer {
     private final List<Geometry> projected;
     private final List<NameLabel> labels = new ArrayList<>();
     private final AtomicReferenceArray<STRtree> bands = new AtomicReferenceArray<>(SIMPLIFIED_BANDS + 1);
+    private final AtomicReferenceArray<List<Part>> bandParts = new AtomicReferenceArray<>(SIMPLIFIED_BANDS + 1);
     private final int[] vertexCounts = new int[SIMPLIFIED_BANDS + 1];
     private final Envelope extentM;
+    private final Envelope maskDeg;
+    private final boolean restored;
+    /** The full-resolution parts per feature, kept until {@link #generalise()} has used them. */
+    private List<List<Part>> fullParts;
     private volatile boolean generalised;
 
-    private PreparedLayer(ChartLayer layer, List<Geometry> projected, Envelope extentM) {
+    private PreparedLayer(ChartLayer layer, List<Geometry> projected, Envelope extentM, Envelope maskDeg,
+            boolean restored) {
         this.layer = layer;
         this.projected = projected;
         this.extentM = extentM;
+        this.maskDeg = maskDeg == null ? null : new Envelope(maskDeg);
+        this.restored = restored;
+    }
+
+    /**
+     * A layer prepared before and read back from {@code PreparedCache}: every band given.
+     *
+     * @param layer the layer (its features need not be kept)
+     * @param extentM the extent (metres)
+     * @param maskDeg the mask it was prepared with, or null
+     * @param labels the names
+     * @param parts the parts of each band, coarsest first, {@link #bandCount()} lists
+     * @return the layer, generalised
+     */
+    static PreparedLayer restore(ChartLayer layer, Envelope extentM, Envelope maskDeg, List<NameLabel> labels,
+            List<List<Part>> parts) {
+        if (parts.size() != SIMPLIFIED_BANDS + 1) {
+            throw new IllegalArgumentException("expected " + (SIMPLIFIED_BANDS + 1) + " bands, got " + parts.size());
+        }
+        PreparedLayer p = new PreparedLayer(layer, null, extentM, maskDeg, true);
+        p.labels.addAll(labels);
+        for (int b = 0; b <= SIMPLIFIED_BANDS; b++) {
+            p.setBand(b, parts.get(b));
+        }
+        p.generalised = true;
+        return p;
     }
 
     /**
@@ -110,8 +161,9 @@ public final class PreparedLayer {
             projected.add(g);
             extentM.expandToInclude(g.getEnvelopeInternal());
         }
-        PreparedLayer p = new PreparedLayer(layer, projected, extentM);
-        p.buildBand(SIMPLIFIED_BANDS, projected);
+        PreparedLayer p = new PreparedLayer(layer, projected, extentM, maskDeg, false);
+        p.fullParts = partsPerFeature(projected, null, null);
+        p.setBand(SIMPLIFIED_BANDS, flatten(p.fullParts));
         for (int i = 0; i < projected.size(); i++) {
             Object name = layer.features().get(i).attributes().get("name");
             Geometry g = projected.get(i);
@@ -127,18 +179,20 @@ public final class PreparedLayer {
     /**
      * Generalises the layer for every coarser band, finest first, each band simplified from the one
      * below it (a cascade: each step removes fewer vertices from fewer, so all bands cost about 1.3
-     * full-resolution passes). The cascade's tolerances are 3/4 of the band's half pixel, so the
-     * accumulated deviation, at most 3/4 (1 + 1/4 + 1/16 + ...) = 1 times the half pixel, stays within
-     * half a pixel. Until a band is ready, {@link #query} draws from the nearest finer band that is:
+     * full-resolution passes). The cascade's tolerances are 3/4 of the band's own, and a finer band's
+     * tolerance in metres is at most 1/4 of the next coarser one's, so the accumulated deviation, at
+     * most 3/4 (1 + 1/4 + 1/16 + ...) = 1 times the band's tolerance, stays within it. Until a band is
+     * ready, {@link #query} draws from the nearest finer band that is:
      * correct, only slower. Slow: call from a worker thread; idempotent.
      */
     public synchronized void generalise() {
-        if (generalised) {
+        if (generalised || projected == null) {
             return;
         }
         List<Geometry> previous = projected;
+        List<List<Part>> previousParts = fullParts;
         for (int b = SIMPLIFIED_BANDS - 1; b >= 0; b--) {
-            double tolM = CASCADE_FRACTION * 0.5 * bandMetresPerPixel(b);
+            double tolM = CASCADE_FRACTION * bandTolerancePx(b) * bandMetresPerPixel(b);
             List<Geometry> simplified = new ArrayList<>(previous.size());
             for (Geometry g : previous) {
                 if (g.getDimension() > 0 && !g.isEmpty()) {
@@ -149,9 +203,12 @@ public final class PreparedLayer {
                 }
                 simplified.add(g);
             }
-            buildBand(b, simplified);
+            List<List<Part>> parts = partsPerFeature(simplified, previous, previousParts);
+            setBand(b, flatten(parts));
             previous = simplified;
+            previousParts = parts;
         }
+        fullParts = null;
         generalised = true;
     }
 
@@ -164,15 +221,83 @@ public final class PreparedLayer {
         return generalised;
     }
 
-    private void buildBand(int b, List<Geometry> geoms) {
+    /**
+     * The parts of each feature; a feature that the simplification left as it was (Douglas-Peucker
+     * only removes vertices, so the same count means the same line) shares the finer band's parts,
+     * which keeps the near-full-resolution bands from each holding a copy of the data.
+     */
+    private static List<List<Part>> partsPerFeature(List<Geometry> geoms, List<Geometry> finer,
+            List<List<Part>> finerParts) {
+        List<List<Part>> out = new ArrayList<>(geoms.size());
+        for (int i = 0; i < geoms.size(); i++) {
+            Geometry g = geoms.get(i);
+            if (finer != null && g.getNumPoints() == finer.get(i).getNumPoints()) {
+                out.add(finerParts.get(i));
+            } else {
+                List<Part> parts = new ArrayList<>(1);
+                addParts(parts, g, i);
+                out.add(parts);
+            }
+        }
+        return out;
+    }
+
+    private static List<Part> flatten(List<List<Part>> perFeature) {
+        List<Part> all = new ArrayList<>();
+        perFeature.forEach(all::addAll);
+        return all;
+    }
+
+    private void setBand(int b, List<Part> parts) {
         STRtree tree = new STRtree();
         int count = 0;
-        for (int i = 0; i < geoms.size(); i++) {
-            count += addParts(tree, geoms.get(i), i);
+        for (Part part : parts) {
+            double x0 = Double.POSITIVE_INFINITY;
+            double y0 = Double.POSITIVE_INFINITY;
+            double x1 = Double.NEGATIVE_INFINITY;
+            double y1 = Double.NEGATIVE_INFINITY;
+            double[] xy = part.xy();
+            for (int i = 0; i < part.n(); i++) {
+                x0 = Math.min(x0, xy[2 * i]);
+                x1 = Math.max(x1, xy[2 * i]);
+                y0 = Math.min(y0, xy[2 * i + 1]);
+                y1 = Math.max(y1, xy[2 * i + 1]);
+            }
+            tree.insert(new Envelope(x0, x1, y0, y1), part);
+            count += part.n();
         }
         tree.build();
         vertexCounts[b] = count;
+        bandParts.set(b, List.copyOf(parts));
         bands.set(b, tree);
+    }
+
+    /**
+     * The parts of a band, for {@code PreparedCache}.
+     *
+     * @param band the band
+     * @return the parts (unmodifiable), or null if the band is not ready
+     */
+    List<Part> parts(int band) {
+        return bandParts.get(band);
+    }
+
+    /**
+     * The mask the layer was prepared with.
+     *
+     * @return the area cut out (degrees), or null
+     */
+    Envelope maskDeg() {
+        return maskDeg == null ? null : new Envelope(maskDeg);
+    }
+
+    /**
+     * Whether the layer was read back prepared from {@code PreparedCache} rather than prepared here.
+     *
+     * @return true if restored
+     */
+    boolean isRestored() {
+        return restored;
     }
 
     private static Geometry cutOut(Geometry g, Geometry mask) {
@@ -187,7 +312,7 @@ public final class PreparedLayer {
         }
     }
 
-    private static int addParts(STRtree tree, Geometry g, int featureIndex) {
+    private static int addParts(List<Part> tree, Geometry g, int featureIndex) {
         int count = 0;
         for (int k = 0; k < g.getNumGeometries(); k++) {
             Geometry e = g.getGeometryN(k);
@@ -210,7 +335,7 @@ public final class PreparedLayer {
         return count;
     }
 
-    private static int addPart(STRtree tree, Geometry line, boolean closed, int featureIndex) {
+    private static int addPart(List<Part> tree, Geometry line, boolean closed, int featureIndex) {
         CoordinateSequence seq = line instanceof LineString l ? l.getCoordinateSequence()
                 : ((Point) line).getCoordinateSequence();
         int n = seq.size();
@@ -223,7 +348,7 @@ public final class PreparedLayer {
             xy[2 * i + 1] = seq.getY(i);
         }
         Envelope e = line.getEnvelopeInternal();
-        tree.insert(e, new Part(xy, n, closed, featureIndex, e.getWidth(), e.getHeight()));
+        tree.add(new Part(xy, n, closed, featureIndex, e.getWidth(), e.getHeight()));
         return n;
     }
 
@@ -246,6 +371,20 @@ public final class PreparedLayer {
             return true;
         }
     };
+
+    /**
+     * The simplification a band allows.
+     *
+     * @param band the band, 0 (coarsest) to {@link #bandCount()} − 1 (full resolution)
+     * @return the largest distance of the drawn line from the source, in pixels at the band's scale
+     *     (0 at full resolution)
+     */
+    public static double bandTolerancePx(int band) {
+        if (band >= SIMPLIFIED_BANDS) {
+            return 0;
+        }
+        return band <= LAST_OVERVIEW_BAND ? OVERVIEW_TOLERANCE_PX : DETAIL_TOLERANCE_PX;
+    }
 
     /**
      * The nominal scale of a band.
