@@ -52,6 +52,7 @@ class DemoRouteAtSeaTest {
     private static final Path DEMO = Path.of("src/main/resources/org/sightwork/celestial/demo");
     private static final GeometryFactory GF = new GeometryFactory();
     private static final List<Geometry> LAND = new ArrayList<>();
+    private static final List<String> NAMES = new ArrayList<>();
 
     @BeforeAll
     static void readLand() {
@@ -60,6 +61,7 @@ class DemoRouteAtSeaTest {
         ChartLayer land = data.layers().stream().filter(l -> l.name().equals("land")).findFirst().orElseThrow();
         for (Feature f : land.features()) {
             LAND.add(f.geometry());
+            NAMES.add(String.valueOf(f.attributes().get("name")));
         }
         assertEquals(29, LAND.size(), "land polygons of the demo region (test-charts/README.md)");
     }
@@ -72,12 +74,21 @@ class DemoRouteAtSeaTest {
      * distance there; near the point (tens of miles) the error is far under the clearance.
      */
     static double landDistanceNm(GeoPosition p) {
+        return landDistanceNm(p, null);
+    }
+
+    /** The same, to the land of one island only (the chart's {@code name}), or all land when null. */
+    static double landDistanceNm(GeoPosition p, String island) {
         AffineTransformation t = AffineTransformation.translationInstance(-p.lonDeg(), -p.latDeg())
                 .scale(60 * Math.cos(Math.toRadians(p.latDeg())), 60);
         Point origin = GF.createPoint(new Coordinate(0, 0));
         Point lonLat = GF.createPoint(new Coordinate(p.lonDeg(), p.latDeg()));
         double best = Double.POSITIVE_INFINITY;
-        for (Geometry g : LAND) {
+        for (int i = 0; i < LAND.size(); i++) {
+            Geometry g = LAND.get(i);
+            if (island != null && !NAMES.get(i).contains(island)) {
+                continue;
+            }
             if (g.intersects(lonLat)) {
                 return -1;
             }
@@ -164,6 +175,15 @@ class DemoRouteAtSeaTest {
         // between the 10-minute samples too (each is about 1 nm from the next)
         double b = checkAtSea("demo true track (between samples)", alongLegs(track), from, to);
         double c = checkAtSea("demo planned legs", alongLegs(wps), from, to);
+        for (String island : new String[] {"Faial", "Pico", "Miguel"}) {
+            double least = Double.POSITIVE_INFINITY;
+            for (GeoPosition p : alongLegs(track)) {
+                if (Sailings.rhumbLine(from, p).distanceNm() >= HARBOUR_NM && Sailings.rhumbLine(to, p).distanceNm() >= HARBOUR_NM) {
+                    least = Math.min(least, landDistanceNm(p, island));
+                }
+            }
+            System.out.printf("demo true track: least offing from %s %.2f nm outside the harbours%n", island, least);
+        }
         System.out.printf("demo: least offing %.2f nm (samples), %.2f nm (between), %.2f nm (planned legs)%n", a, b, c);
     }
 
