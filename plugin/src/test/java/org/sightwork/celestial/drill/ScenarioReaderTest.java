@@ -16,9 +16,9 @@ class ScenarioReaderTest {
         Scenario s = Scenarios.demo();
         assertTrue(s.invented(), "the demo is marked invented");
         assertTrue(s.description().startsWith("INVENTED"), s.description());
-        assertEquals(3, s.track().waypoints().size(), "waypoints");
-        assertEquals(38 + 32.0 / 60, s.track().start().latDeg(), 1e-12, "departure latitude from d°m.m′");
-        assertEquals(-(28 + 37.0 / 60), s.track().start().lonDeg(), 1e-12, "departure longitude, W negative");
+        assertEquals(5, s.track().waypoints().size(), "waypoints");
+        assertEquals(38 + 31.8 / 60, s.track().start().latDeg(), 1e-12, "departure latitude from d°m.m′");
+        assertEquals(-(28 + 37.2 / 60), s.track().start().lonDeg(), 1e-12, "departure longitude, W negative");
         assertEquals(Limb.LOWER, s.schedule().sights().get(0).limb(), "limb");
         assertEquals(2, s.schedule().auto().orElseThrow().days().size(), "two auto days");
         assertTrue(s.gives(Scenario.Given.WATCH_ERROR), "watch error given");
@@ -30,8 +30,9 @@ class ScenarioReaderTest {
     void everyProblemIsReportedTogetherWithItsField() {
         String json = Scenarios.demoJson()
                 .replace("\"formatVersion\": 1", "\"formatVersion\": 2")
-                .replace("\"lat\": \"38°21.0'N\"", "\"lat\": \"95N\"")
-                .replace("\"speedKn\": 6.2", "\"speedKn\": 6.2, \"utc\": \"2026-06-22T00:00:00Z\"")
+                .replace("\"lat\": \"38°27.0'N\"", "\"lat\": \"95N\"")
+                .replace("\"lon\": \"028°24.0'W\", \"speedKn\": 5.5",
+                        "\"lon\": \"028°24.0'W\", \"speedKn\": 5.5, \"utc\": \"2026-06-22T00:00:00Z\"")
                 .replace("\"limb\": \"lower\"", "\"limb\": \"left\"")
                 .replace("\"watchErrorS\": 12", "\"watchErrorS\": 12, \"colour\": \"red\"")
                 .replace("\"departure\", \"indexError\"", "\"departure\", \"gps\", \"indexError\"");

@@ -27,12 +27,17 @@ public final class DemoPassageGenerator {
 
     static final long SEED = 20260621L;
     static final Instant DEPARTURE = Instant.parse("2026-06-20T23:30:00Z");
-    /** The planned route (invented): Horta, south of Pico, off the west end of São Miguel, Ponta Delgada. */
+    /**
+     * The planned route (invented), kept off the land of the bundled chart (checked by
+     * {@code DemoRouteAtSeaTest}): Horta, through the Faial-Pico channel, round the south-west and
+     * south of Pico, across to south-west of Ponta Delgada, Ponta Delgada.
+     */
     static final GeoPosition[] WAYPOINTS = {
-        new GeoPosition(38.530, -28.620), new GeoPosition(38.300, -28.300),
-        new GeoPosition(37.800, -25.800), new GeoPosition(37.735, -25.655)};
-    static final String[] WAYPOINT_NAMES = {"Horta (off the breakwater)", "WP1 south of Pico",
-        "WP2 off Ponta da Ferraria (São Miguel)", "Ponta Delgada (off the marina)"};
+        new GeoPosition(38.530, -28.620), new GeoPosition(38.450, -28.590), new GeoPosition(38.340, -28.400),
+        new GeoPosition(38.310, -28.000), new GeoPosition(37.690, -25.800), new GeoPosition(37.725, -25.665)};
+    static final String[] WAYPOINT_NAMES = {"Horta (off the breakwater)", "WP1 Faial-Pico channel",
+        "WP2 south-west of Pico", "WP3 south of Pico", "WP4 south-west of Ponta Delgada",
+        "Ponta Delgada (off the marina)"};
     /** Invented truth: current set 160° drift 0.5 kn, log reads 3 % high, compass 1.5° low. */
     static final double CURRENT_SET_DEG = 160;
     static final double CURRENT_DRIFT_KN = 0.5;
