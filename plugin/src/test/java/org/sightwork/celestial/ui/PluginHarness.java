@@ -33,6 +33,7 @@ import org.sightwork.geo.spi.PluginContext;
 import org.sightwork.geo.spi.Progress;
 import org.sightwork.geo.spi.Severity;
 import org.sightwork.geo.testing.HeadlessFx;
+import org.sightwork.geo.testing.LayerOverlays;
 
 /**
  * For tests: the celestial plugin started as the window starts it (panels and commands made, not
@@ -197,34 +198,7 @@ final class PluginHarness implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        LayerEntry entry = new LayerEntry(name, LayerEntry.Kind.OVERLAY, frame -> painter.paint(frame.painter()));
-        chart.layers().add(0, entry);
-        return new Overlay() {
-            @Override
-            public String name() {
-                return name;
-            }
-
-            @Override
-            public boolean isVisible() {
-                return entry.visibleProperty().get();
-            }
-
-            @Override
-            public void setVisible(boolean visible) {
-                entry.visibleProperty().set(visible);
-            }
-
-            @Override
-            public void repaint() {
-                // each render paints afresh
-            }
-
-            @Override
-            public void remove() {
-                chart.layers().remove(entry);
-            }
-        };
+        return LayerOverlays.add(chart.layers(), name, painter);
     }
 
     @Override

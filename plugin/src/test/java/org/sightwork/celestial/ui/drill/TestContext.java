@@ -9,13 +9,13 @@ import java.util.function.Consumer;
 import javafx.beans.property.ObjectProperty;
 import javafx.scene.Node;
 import org.sightwork.geo.app.HeadlessChart;
-import org.sightwork.geo.app.LayerEntry;
 import org.sightwork.geo.earth.GeoPosition;
 import org.sightwork.geo.spi.BackgroundTask;
 import org.sightwork.geo.spi.Overlay;
 import org.sightwork.geo.spi.OverlayPainter;
 import org.sightwork.geo.spi.PluginContext;
 import org.sightwork.geo.spi.Severity;
+import org.sightwork.geo.testing.LayerOverlays;
 
 /**
  * A plugin context over a {@link HeadlessChart} started without plugins, so that a test holds the
@@ -36,33 +36,7 @@ final class TestContext implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        LayerEntry e = new LayerEntry(name, LayerEntry.Kind.OVERLAY, frame -> painter.paint(frame.painter()));
-        chart.model().layers().add(0, e);
-        return new Overlay() {
-            @Override
-            public String name() {
-                return name;
-            }
-
-            @Override
-            public boolean isVisible() {
-                return e.visibleProperty().get();
-            }
-
-            @Override
-            public void setVisible(boolean visible) {
-                e.visibleProperty().set(visible);
-            }
-
-            @Override
-            public void repaint() {
-            }
-
-            @Override
-            public void remove() {
-                chart.model().layers().remove(e);
-            }
-        };
+        return LayerOverlays.add(chart.model().layers(), name, painter);
     }
 
     @Override
