@@ -1,5 +1,2 @@
-/**
- * Test helpers published in geo's test jar: headless JavaFX start-up, the test charts, a test plugin,
- * overlays for test plugin contexts.
- */
+/** Test helpers published in geo's test jar: headless JavaFX start-up, the test charts, a test plugin. */
 package org.sightwork.geo.testing;

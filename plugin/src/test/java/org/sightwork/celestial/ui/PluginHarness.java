@@ -33,7 +33,6 @@ import org.sightwork.geo.spi.PluginContext;
 import org.sightwork.geo.spi.Progress;
 import org.sightwork.geo.spi.Severity;
 import org.sightwork.geo.testing.HeadlessFx;
-import org.sightwork.geo.testing.LayerOverlays;
 
 /**
  * For tests: the celestial plugin started as the window starts it (panels and commands made, not
@@ -198,7 +197,9 @@ final class PluginHarness implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        return LayerOverlays.add(chart.layers(), name, painter);
+        return LayerEntry.addOverlay(chart.layers(), name, painter, () -> {
+            // each render paints afresh
+        });
     }
 
     @Override

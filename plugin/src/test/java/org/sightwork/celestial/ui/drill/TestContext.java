@@ -9,13 +9,13 @@ import java.util.function.Consumer;
 import javafx.beans.property.ObjectProperty;
 import javafx.scene.Node;
 import org.sightwork.geo.app.HeadlessChart;
+import org.sightwork.geo.app.LayerEntry;
 import org.sightwork.geo.earth.GeoPosition;
 import org.sightwork.geo.spi.BackgroundTask;
 import org.sightwork.geo.spi.Overlay;
 import org.sightwork.geo.spi.OverlayPainter;
 import org.sightwork.geo.spi.PluginContext;
 import org.sightwork.geo.spi.Severity;
-import org.sightwork.geo.testing.LayerOverlays;
 
 /**
  * A plugin context over a {@link HeadlessChart} started without plugins, so that a test holds the
@@ -36,7 +36,9 @@ final class TestContext implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        return LayerOverlays.add(chart.model().layers(), name, painter);
+        return LayerEntry.addOverlay(chart.model().layers(), name, painter, () -> {
+            // each render paints afresh
+        });
     }
 
     @Override
