@@ -68,11 +68,8 @@ public final class CsvTrackIo {
             if (s.isBlank() || s.startsWith("#")) {
                 continue;
             }
-            CsvLine cells;
-            try {
-                cells = CsvLine.split(s);
-            } catch (IllegalArgumentException e) {
-                problems.add(lineNo, 0, e.getMessage());
+            CsvLine cells = split(s, lineNo, problems);
+            if (cells == null) {
                 if (col == null) {
                     return problems.result(b.build());
                 }
@@ -133,6 +130,20 @@ public final class CsvTrackIo {
 
     private static String cell(OptionalDouble v) {
         return v.isPresent() ? String.format(Locale.ROOT, "%.2f", v.getAsDouble()) : "";
+    }
+
+    /**
+     * Splits one CSV line, or reports why it cannot. Also used by the DR log.
+     *
+     * @return the cells, or null when a quoted cell is not closed (reported)
+     */
+    static CsvLine split(String s, long lineNo, Problems problems) {
+        try {
+            return CsvLine.split(s);
+        } catch (IllegalArgumentException e) {
+            problems.add(lineNo, 0, e.getMessage());
+            return null;
+        }
     }
 
     /** Reads the cells of one CSV line, reporting what it cannot read. Also used by the DR log. */

@@ -140,11 +140,8 @@ public record DrLog(GeoPosition departure, List<DrLeg> legs, Instant end) {
             if (s.isBlank() || s.startsWith("#")) {
                 continue;
             }
-            CsvLine cells;
-            try {
-                cells = CsvLine.split(s);
-            } catch (IllegalArgumentException e) {
-                problems.add(lineNo, 0, e.getMessage());
+            CsvLine cells = CsvTrackIo.split(s, lineNo, problems);
+            if (cells == null) {
                 if (col == null) {
                     return problems.result(java.util.Optional.empty());
                 }
