@@ -62,15 +62,12 @@ import org.sightwork.geo.spi.Severity;
  * and preparing chart files go through {@link TaskRunner} (worker threads); the result is handed
  * back with {@code Platform.runLater}; a frame only draws prepared data.
  */
-final class ChartWindow implements Shell {
+final class ChartWindow extends ShellBase {
 
     private static final String CAUTION_KEY = "caution.shown";
     private static final String PALETTE_KEY = "palette";
 
     private final Stage stage;
-    private final ChartModel model = new ChartModel();
-    private final UserFiles userFiles = UserFiles.defaultLocation();
-    private final TaskRunner tasks = new TaskRunner(this::notify);
     private final PluginHost plugins = new PluginHost(this);
     private final Label cursorLabel = new Label();
     private final Label rangeLabel = new Label();
@@ -455,21 +452,6 @@ final class ChartWindow implements Shell {
     }
 
     // ---- Shell ----
-
-    @Override
-    public ChartModel model() {
-        return model;
-    }
-
-    @Override
-    public TaskRunner tasks() {
-        return tasks;
-    }
-
-    @Override
-    public UserFiles userFiles() {
-        return userFiles;
-    }
 
     @Override
     public boolean isHeadless() {

@@ -20,11 +20,8 @@ import org.sightwork.geo.spi.Severity;
  * <p><b>Thread:</b> make it and call {@link #render} on the JavaFX application thread
  * ({@link HeadlessPlatform#call}).
  */
-public final class HeadlessChart implements Shell {
+public final class HeadlessChart extends ShellBase {
 
-    private final ChartModel model = new ChartModel();
-    private final TaskRunner tasks = new TaskRunner(this::notify);
-    private final UserFiles userFiles = UserFiles.defaultLocation();
     private final ChartRenderer renderer = new ChartRenderer();
     private final PluginHost plugins = new PluginHost(this);
     private Viewport requestedArea;
@@ -46,16 +43,6 @@ public final class HeadlessChart implements Shell {
         if (startPlugins) {
             plugins.startAll();
         }
-    }
-
-    /**
-     * The model (layers, palette, passage time).
-     *
-     * @return the model
-     */
-    @Override
-    public ChartModel model() {
-        return model;
     }
 
     /**
@@ -123,16 +110,6 @@ public final class HeadlessChart implements Shell {
     public void close() {
         plugins.stopAll();
         tasks.shutdown();
-    }
-
-    @Override
-    public TaskRunner tasks() {
-        return tasks;
-    }
-
-    @Override
-    public UserFiles userFiles() {
-        return userFiles;
     }
 
     @Override

@@ -99,39 +99,7 @@ final class PluginHost {
 
         @Override
         public Overlay addOverlay(String name, OverlayPainter painter) {
-            LayerEntry[] holder = new LayerEntry[1];
-            LayerEntry entry = new LayerEntry(name, LayerEntry.Kind.OVERLAY, frame -> painter.paint(frame.painter()));
-            holder[0] = entry;
-            shell.model().layers().add(0, entry);
-            entry.visibleProperty().addListener((o, a, b) -> shell.requestRepaint());
-            shell.requestRepaint();
-            return new Overlay() {
-                @Override
-                public String name() {
-                    return name;
-                }
-
-                @Override
-                public boolean isVisible() {
-                    return holder[0].visibleProperty().get();
-                }
-
-                @Override
-                public void setVisible(boolean visible) {
-                    holder[0].visibleProperty().set(visible);
-                }
-
-                @Override
-                public void repaint() {
-                    shell.requestRepaint();
-                }
-
-                @Override
-                public void remove() {
-                    shell.model().layers().remove(holder[0]);
-                    shell.requestRepaint();
-                }
-            };
+            return LayerEntry.addOverlay(shell.model().layers(), name, painter, shell::requestRepaint);
         }
 
         @Override

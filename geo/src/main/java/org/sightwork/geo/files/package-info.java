@@ -1,7 +1,10 @@
 /**
- * Safe writing of the user's files: one writer, {@link org.sightwork.geo.files.SafeWrite}, for every
- * file Sightwork writes on the user's behalf (settings, sessions, tracks, reports, drill packs,
- * images).
+ * Reading and writing the user's files: one writer, {@link org.sightwork.geo.files.SafeWrite}, for
+ * every file Sightwork writes on the user's behalf (settings, sessions, tracks, reports, drill packs,
+ * images), and one CSV line splitter, {@link org.sightwork.geo.files.CsvLine}, for every CSV it reads
+ * (RFC 4180 quoting, the column of each cell for the error messages).
+ *
+ * <p>The contract below is the writer's.
  *
  * <p><b>Contract.</b> A write
  * <ol>

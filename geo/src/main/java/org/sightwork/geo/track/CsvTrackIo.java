@@ -10,10 +10,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
-import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
+import org.sightwork.geo.files.CsvLine;
 import org.sightwork.geo.files.SafeWrite;
 
 /**
@@ -68,12 +68,15 @@ public final class CsvTrackIo {
             if (s.isBlank() || s.startsWith("#")) {
                 continue;
             }
-            String[] cells = s.split(",", -1);
-            if (col == null) {
-                col = new HashMap<>();
-                for (int i = 0; i < cells.length; i++) {
-                    col.put(cells[i].strip().toLowerCase(Locale.ROOT), i);
+            CsvLine cells = split(s, lineNo, problems);
+            if (cells == null) {
+                if (col == null) {
+                    return problems.result(b.build());
                 }
+                continue;
+            }
+            if (col == null) {
+                col = cells.indexByName();
                 for (String needed : new String[] {"time_utc", "lat_deg", "lon_deg"}) {
                     if (!col.containsKey(needed)) {
                         problems.add(lineNo, 0, "the header has no column '" + needed + "': expected " + HEADER);
@@ -129,14 +132,28 @@ public final class CsvTrackIo {
         return v.isPresent() ? String.format(Locale.ROOT, "%.2f", v.getAsDouble()) : "";
     }
 
+    /**
+     * Splits one CSV line, or reports why it cannot. Also used by the DR log.
+     *
+     * @return the cells, or null when a quoted cell is not closed (reported)
+     */
+    static CsvLine split(String s, long lineNo, Problems problems) {
+        try {
+            return CsvLine.split(s);
+        } catch (IllegalArgumentException e) {
+            problems.add(lineNo, 0, e.getMessage());
+            return null;
+        }
+    }
+
     /** Reads the cells of one CSV line, reporting what it cannot read. Also used by the DR log. */
     static final class Cells {
-        private final String[] cells;
+        private final CsvLine cells;
         private final Map<String, Integer> col;
         private final long lineNo;
         private final Problems problems;
 
-        Cells(String[] cells, Map<String, Integer> col, long lineNo, Problems problems) {
+        Cells(CsvLine cells, Map<String, Integer> col, long lineNo, Problems problems) {
             this.cells = cells;
             this.col = col;
             this.lineNo = lineNo;
@@ -144,12 +161,13 @@ public final class CsvTrackIo {
         }
 
         int column(String name) {
-            return col.getOrDefault(name, -1) + 1;
+            Integer i = col.get(name);
+            return i == null ? 0 : CsvLine.column(i);
         }
 
         String raw(String name) {
             Integer i = col.get(name);
-            return i == null || i >= cells.length ? "" : cells[i].strip();
+            return i == null ? "" : cells.cell(i).strip();
         }
 
         private IllegalArgumentException fail(String name, String message) {

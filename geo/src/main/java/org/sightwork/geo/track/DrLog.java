@@ -8,13 +8,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
 import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.files.CsvLine;
 
 /**
  * A dead-reckoning log: a departure and the legs steered after it.
@@ -141,12 +140,15 @@ public record DrLog(GeoPosition departure, List<DrLeg> legs, Instant end) {
             if (s.isBlank() || s.startsWith("#")) {
                 continue;
             }
-            String[] cells = s.split(",", -1);
-            if (col == null) {
-                col = new HashMap<>();
-                for (int i = 0; i < cells.length; i++) {
-                    col.put(cells[i].strip().toLowerCase(Locale.ROOT), i);
+            CsvLine cells = CsvTrackIo.split(s, lineNo, problems);
+            if (cells == null) {
+                if (col == null) {
+                    return problems.result(java.util.Optional.empty());
                 }
+                continue;
+            }
+            if (col == null) {
+                col = cells.indexByName();
                 for (String needed : new String[] {"time_utc", "heading_deg", "stw_kn"}) {
                     if (!col.containsKey(needed)) {
                         problems.add(lineNo, 0, "the header has no column '" + needed + "': expected " + HEADER);

@@ -27,6 +27,7 @@ import org.sightwork.celestial.sight.Limb;
 import org.sightwork.celestial.sight.Sight;
 import org.sightwork.geo.earth.Angles;
 import org.sightwork.geo.earth.GeoPosition;
+import org.sightwork.geo.files.CsvLine;
 
 /**
  * Reads the sight log CSV (format in {@code docs/SIGHT-LOG.md}).
@@ -38,9 +39,9 @@ import org.sightwork.geo.earth.GeoPosition;
  * (the sight book's habit of writing a value once); a blank DR is the row above's DR run on along
  * its course and speed to this row's time. With nothing above, the defaults of {@link Sight}.
  *
- * <p>The CSV is split by hand (RFC 4180: commas, double-quoted cells with "" for a quote) because
- * the error report needs the column of every cell and the project carries no CSV library; the
- * splitter is 30 lines. Lines starting with {@code #} and blank lines are skipped.
+ * <p>Lines are split by {@link CsvLine} (RFC 4180 quoting: commas, double-quoted cells with "" for a
+ * quote), by hand because the error report needs the column of every cell and the project carries
+ * no CSV library. Lines starting with {@code #} and blank lines are skipped.
  *
  * <p>Thread safety: stateless.
  */
@@ -93,7 +94,7 @@ public final class SightLogReader {
             }
             List<String> cells;
             try {
-                cells = split(text);
+                cells = CsvLine.split(text).cells();
             } catch (IllegalArgumentException e) {
                 problems.add(new LogProblem(fileName, lineNo, 0, "", e.getMessage()));
                 continue;
@@ -393,39 +394,5 @@ public final class SightLogReader {
                 return null;
             }
         }
-    }
-
-    /** Splits one CSV line (RFC 4180 quoting, no line breaks inside a cell). */
-    static List<String> split(String line) {
-        List<String> cells = new ArrayList<>();
-        StringBuilder cell = new StringBuilder();
-        boolean quoted = false;
-        for (int i = 0; i < line.length(); i++) {
-            char c = line.charAt(i);
-            if (quoted) {
-                if (c == '"') {
-                    if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
-                        cell.append('"');
-                        i++;
-                    } else {
-                        quoted = false;
-                    }
-                } else {
-                    cell.append(c);
-                }
-            } else if (c == '"') {
-                quoted = true;
-            } else if (c == ',') {
-                cells.add(cell.toString());
-                cell.setLength(0);
-            } else {
-                cell.append(c);
-            }
-        }
-        if (quoted) {
-            throw new IllegalArgumentException("a quoted cell is not closed: expected a closing \"");
-        }
-        cells.add(cell.toString());
-        return cells;
     }
 }

@@ -9,11 +9,11 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.sightwork.geo.earth.Angles;
+import org.sightwork.geo.files.CsvLine;
 import org.sightwork.geo.earth.GeoPosition;
 import org.sightwork.geo.track.ImportProblem;
 import org.sightwork.geo.track.ImportResult;
@@ -73,12 +73,18 @@ public final class ObservationCsv {
             if (s.isBlank() || s.startsWith("#")) {
                 continue;
             }
-            String[] c = s.split(",", -1);
-            if (col == null) {
-                col = new HashMap<>();
-                for (int i = 0; i < c.length; i++) {
-                    col.put(c[i].strip().toLowerCase(Locale.ROOT), i);
+            CsvLine c;
+            try {
+                c = CsvLine.split(s);
+            } catch (IllegalArgumentException e) {
+                problems.add(new ImportProblem(name, line, 0, e.getMessage()));
+                if (col == null) {
+                    return new ImportResult<>(out, problems, problems.size());
                 }
+                continue;
+            }
+            if (col == null) {
+                col = c.indexByName();
                 for (String need : new String[] {"time_utc", "kind", "lat", "lon"}) {
                     if (!col.containsKey(need)) {
                         problems.add(new ImportProblem(name, line, 0, "the header has no column '" + need
@@ -121,19 +127,19 @@ public final class ObservationCsv {
     }
 
     private static final class Row {
-        final String[] c;
+        final CsvLine c;
         final Map<String, Integer> col;
         int lastColumn;
 
-        Row(String[] c, Map<String, Integer> col, String name, long line) {
+        Row(CsvLine c, Map<String, Integer> col, String name, long line) {
             this.c = c;
             this.col = col;
         }
 
         String raw(String k) {
             Integer i = col.get(k);
-            lastColumn = i == null ? 0 : i + 1;
-            return i == null || i >= c.length ? "" : c[i].strip();
+            lastColumn = i == null ? 0 : CsvLine.column(i);
+            return i == null ? "" : c.cell(i).strip();
         }
 
         IllegalArgumentException fail(String k, String msg) {

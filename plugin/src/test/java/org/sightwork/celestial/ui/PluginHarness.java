@@ -197,34 +197,9 @@ final class PluginHarness implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        LayerEntry entry = new LayerEntry(name, LayerEntry.Kind.OVERLAY, frame -> painter.paint(frame.painter()));
-        chart.layers().add(0, entry);
-        return new Overlay() {
-            @Override
-            public String name() {
-                return name;
-            }
-
-            @Override
-            public boolean isVisible() {
-                return entry.visibleProperty().get();
-            }
-
-            @Override
-            public void setVisible(boolean visible) {
-                entry.visibleProperty().set(visible);
-            }
-
-            @Override
-            public void repaint() {
-                // each render paints afresh
-            }
-
-            @Override
-            public void remove() {
-                chart.layers().remove(entry);
-            }
-        };
+        return LayerEntry.addOverlay(chart.layers(), name, painter, () -> {
+            // each render paints afresh
+        });
     }
 
     @Override

@@ -36,33 +36,9 @@ final class TestContext implements PluginContext {
 
     @Override
     public Overlay addOverlay(String name, OverlayPainter painter) {
-        LayerEntry e = new LayerEntry(name, LayerEntry.Kind.OVERLAY, frame -> painter.paint(frame.painter()));
-        chart.model().layers().add(0, e);
-        return new Overlay() {
-            @Override
-            public String name() {
-                return name;
-            }
-
-            @Override
-            public boolean isVisible() {
-                return e.visibleProperty().get();
-            }
-
-            @Override
-            public void setVisible(boolean visible) {
-                e.visibleProperty().set(visible);
-            }
-
-            @Override
-            public void repaint() {
-            }
-
-            @Override
-            public void remove() {
-                chart.model().layers().remove(e);
-            }
-        };
+        return LayerEntry.addOverlay(chart.model().layers(), name, painter, () -> {
+            // each render paints afresh
+        });
     }
 
     @Override
