@@ -10,19 +10,11 @@ import datetime
 import math
 import os
 import random
-import subprocess
 import sys
 
 
-def ensure_ephem():
-    try:
-        import ephem  # noqa: F401
-    except ImportError:
-        cmd = ["apt-get", "install", "-y", "python3-ephem"]
-        if subprocess.call(cmd) != 0:
-            subprocess.check_call(["apt-get", "update"])
-            subprocess.check_call(cmd)
-
+# The PyEphem install, the nautical zone and the ISO time format are those of the fixed-place table.
+from planning_pyephem import ensure_ephem, iso, zone_hours  # noqa: E402
 
 ensure_ephem()
 import ephem  # noqa: E402
@@ -53,9 +45,6 @@ EVENTS = [  # (column, body, horizon, use_center, kind)
 ]
 
 
-def zone_hours(lon):
-    return int(math.floor(lon / 15.0 + 0.5)) if lon < 180.0 else 12
-
 
 def rhumb(lat, lon, course, dist_nm):
     """Mercator sailing on the sphere of 1 nm per arcminute (Bowditch Pub. 9, ch. 24)."""
@@ -69,11 +58,6 @@ def rhumb(lat, lon, course, dist_nm):
     l2 = (l2 + math.pi) % (2 * math.pi) - math.pi
     return math.degrees(p2), math.degrees(l2)
 
-
-def iso(d):
-    dt = ephem.Date(d).datetime()
-    dt = dt.replace(microsecond=0) + datetime.timedelta(seconds=round(dt.microsecond / 1e6))
-    return dt.strftime("%Y-%m-%dT%H:%M:%SZ")
 
 
 def event_at(lat, lon, name, horizon, center, kind, start):

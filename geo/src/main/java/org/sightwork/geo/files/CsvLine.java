@@ -5,6 +5,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 
 /**
  * One line of a CSV file, split into its cells, for the readers of the user's CSV files (tracks,
@@ -111,5 +112,21 @@ public record CsvLine(List<String> cells) {
             col.put(cells.get(i).strip().toLowerCase(Locale.ROOT), i);
         }
         return col;
+    }
+
+    /**
+     * Reads a cell as a finite decimal number (Java's {@code Double.parseDouble} syntax; NaN and
+     * infinities are not numbers a log holds).
+     *
+     * @param cell the cell's text, stripped
+     * @return the number, or empty when the cell is not a finite number
+     */
+    public static OptionalDouble finiteNumber(String cell) {
+        try {
+            double d = Double.parseDouble(cell);
+            return Double.isFinite(d) ? OptionalDouble.of(d) : OptionalDouble.empty();
+        } catch (NumberFormatException e) {
+            return OptionalDouble.empty();
+        }
     }
 }

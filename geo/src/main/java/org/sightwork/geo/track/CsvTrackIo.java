@@ -205,15 +205,8 @@ public final class CsvTrackIo {
 
         double number(String name, String unit) {
             String v = raw(name);
-            try {
-                double d = Double.parseDouble(v);
-                if (!Double.isFinite(d)) {
-                    throw new NumberFormatException();
-                }
-                return d;
-            } catch (NumberFormatException e) {
-                throw fail(name, name + " '" + v + "' is not a number (" + unit + ")");
-            }
+            return CsvLine.finiteNumber(v)
+                    .orElseThrow(() -> fail(name, name + " '" + v + "' is not a number (" + unit + ")"));
         }
 
         double optional(String name) {

@@ -163,15 +163,8 @@ public final class ObservationCsv {
 
         double number(String k, String unit) {
             String v = raw(k);
-            try {
-                double d = Double.parseDouble(v);
-                if (!Double.isFinite(d)) {
-                    throw new NumberFormatException();
-                }
-                return d;
-            } catch (NumberFormatException e) {
-                throw new IllegalArgumentException(k + " '" + v + "' is not a number (" + unit + ")");
-            }
+            return CsvLine.finiteNumber(v)
+                    .orElseThrow(() -> new IllegalArgumentException(k + " '" + v + "' is not a number (" + unit + ")"));
         }
     }
 }
